@@ -1,0 +1,42 @@
+package org.telltale.cli;
+
+import java.io.PrintWriter;
+import org.telltale.ExitCodes;
+import picocli.CommandLine;
+
+/** Entry point of {@code telltale}: builds the command tree and maps every outcome to an exit code. */
+public final class Main {
+    private Main() {
+    }
+
+    public static void main(String[] args) {
+        System.exit(run(args));
+    }
+
+    /** Runs one command line and returns its exit code; used by tests without exiting the JVM. */
+    public static int run(String... args) {
+        return commandLine().execute(args);
+    }
+
+    /** The full command tree, configured with Telltale's error handling and exit codes. */
+    public static CommandLine commandLine() {
+        CommandLine cli = new CommandLine(new TelltaleCommand());
+        cli.setExecutionExceptionHandler(new ErrorHandler());
+        cli.setParameterExceptionHandler(new UsageErrorHandler());
+        cli.setExitCodeExceptionMapper(e -> ExitCodes.ERROR);
+        cli.setCaseInsensitiveEnumValuesAllowed(true);
+        return cli;
+    }
+
+    /** Usage errors: one line naming the problem, a hint to --help, exit 2. */
+    static final class UsageErrorHandler implements CommandLine.IParameterExceptionHandler {
+        @Override
+        public int handleParseException(CommandLine.ParameterException ex, String[] args) {
+            PrintWriter err = ex.getCommandLine().getErr();
+            err.println("telltale: " + ex.getMessage());
+            err.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help' for more information.");
+            err.flush();
+            return ExitCodes.USAGE;
+        }
+    }
+}
