@@ -1,0 +1,192 @@
+package org.telltale.audit;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import org.telltale.text.Span;
+
+/**
+ * Everything one audit concluded: a summary of the run, the findings, the scrub test per kind and
+ * the documents picked for a reviewer. Its public face is the {@code telltale.audit} v1 JSON
+ * contract written by {@code org.telltale.report.json.AuditJson}; a report can always be rendered
+ * from that file alone (together with {@code explanations.jsonl}).
+ *
+ * <p>Immutable; collections are copied on construction.
+ */
+public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> scrub, List<String> picks) {
+
+    public AuditResult {
+        Objects.requireNonNull(summary, "summary");
+        findings = List.copyOf(findings);
+        scrub = List.copyOf(scrub);
+        picks = List.copyOf(picks);
+    }
+
+    /** An unmodifiable copy that keeps the caller's order, so JSON output is stable. */
+    static <K, V> Map<K, V> ordered(Map<K, V> map) {
+        return Collections.unmodifiableMap(new LinkedHashMap<>(map));
+    }
+
+    /** The findings a CI gate counts: not suppressed by the policy, at least {@code severity}. */
+    public List<Finding> open(Severity severity) {
+        return findings.stream().filter(f -> !f.suppressed() && f.severity().atLeast(severity)).toList();
+    }
+
+    /**
+     * What was audited and how.
+     *
+     * @param documents         documents in the corpus that were scored
+     * @param explained         documents explained (the stratified sample)
+     * @param labels            the model's labels, in its order
+     * @param accuracy          share of scored documents whose prediction equals the gold label, or
+     *                          {@code null} when the corpus carries no gold labels
+     * @param skipped           corpus records skipped as unreadable ({@code --skip-bad})
+     * @param retries           scoring calls the connector had to repeat
+     * @param model             the model's description; never a secret
+     * @param corpus            the corpus file's name
+     * @param seed              the run seed every random stream derives from
+     * @param settings          the settings that decided this result
+     * @param associationBasis  {@code gold} when association is measured against gold labels (all
+     *                          documents carry one), else {@code predicted}
+     * @param prior             each label's share of the corpus on that basis: the null hypothesis
+     *                          of the z-test
+     * @param predictedCounts   documents the model assigns to each label
+     * @param zThreshold        the Bonferroni-corrected one-sided critical value
+     * @param termsTested       (term, label) pairs tested, the Bonferroni divisor
+     * @param pickCoverage      share of the total importance the picked documents cover
+     * @param elapsedMs         wall time of the run, resumed parts included; the only field that is
+     *                          allowed to differ between a resumed and an uninterrupted run
+     */
+    public record Summary(
+            long documents,
+            int explained,
+            List<String> labels,
+            Double accuracy,
+            long skipped,
+            long retries,
+            String model,
+            String corpus,
+            long seed,
+            AuditSettings settings,
+            String associationBasis,
+            Map<String, Double> prior,
+            Map<String, Long> predictedCounts,
+            double zThreshold,
+            int termsTested,
+            double pickCoverage,
+            long elapsedMs) {
+
+        public Summary {
+            labels = List.copyOf(labels);
+            prior = ordered(prior);
+            predictedCounts = ordered(predictedCounts);
+        }
+    }
+
+    /**
+     * A term flagged as a likely artefact, with the evidence for it.
+     *
+     * @param term             the analyzed term
+     * @param kind             where its occurrences sit (the dominant non-content place)
+     * @param severity         see {@link SeverityRules}
+     * @param label            the label it pushes the model towards and is associated with
+     * @param support          corpus documents that contain the term
+     * @param importance       sqrt of the summed absolute weights over explained documents
+     *                         (Ribeiro et al. 2016, §4)
+     * @param association      the z-statistic against the label prior; same value as {@code z}
+     * @param confirmed        whether scrubbing the term alone moved predictions
+     * @param z                one-sided z-statistic (Gardner et al. 2021, Eq. 1, prior as null)
+     * @param pmi              log2 p̂(label | term) / p(label)
+     * @param pLabelGivenTerm  p̂(label | term) over the corpus
+     * @param df               corpus documents containing the term, per label (association basis)
+     * @param meanWeight       mean signed weight over the explanations that selected it
+     * @param signConsistency  share of those weights with the sign of the mean
+     * @param selectedIn       explained documents whose explanation selected it for {@code label}
+     * @param suppressed       whether the policy accepts it as expected evidence
+     * @param policy           {@code accepted}, {@code artefact} or {@code null}: the policy rule
+     *                         that matched
+     * @param policyNote       the reviewer's note on that rule, or {@code null}
+     * @param kindShares       share of the term's corpus occurrences in each place
+     * @param scrubFlips       explained documents whose prediction flipped when the term was removed
+     * @param scrubDrop        mean drop of {@code label}'s score in those documents
+     * @param examples         explained documents where it was selected, with its spans there
+     */
+    public record Finding(
+            String term,
+            ArtefactKind kind,
+            Severity severity,
+            String label,
+            long support,
+            double importance,
+            double association,
+            boolean confirmed,
+            double z,
+            double pmi,
+            double pLabelGivenTerm,
+            Map<String, Long> df,
+            double meanWeight,
+            double signConsistency,
+            int selectedIn,
+            boolean suppressed,
+            String policy,
+            String policyNote,
+            Map<String, Double> kindShares,
+            int scrubFlips,
+            double scrubDrop,
+            List<Example> examples) {
+
+        public Finding {
+            Objects.requireNonNull(term, "term");
+            Objects.requireNonNull(kind, "kind");
+            Objects.requireNonNull(severity, "severity");
+            Objects.requireNonNull(label, "label");
+            df = ordered(df);
+            kindShares = ordered(kindShares);
+            examples = List.copyOf(examples);
+        }
+    }
+
+    /** One explained document where a finding's term was selected, and the term's spans in it. */
+    public record Example(String id, List<Span> spans) {
+        public Example {
+            Objects.requireNonNull(id, "id");
+            spans = List.copyOf(spans);
+        }
+    }
+
+    /**
+     * The scrub test of one kind: documents rewritten without the kind's flagged terms (or its
+     * whole offending lines and blocks) and scored again.
+     *
+     * @param kind           the kind scrubbed
+     * @param mode           {@code terms} (the flagged terms' spans cut) or {@code lines} (whole
+     *                       header blocks or repeated lines cut)
+     * @param terms          the flagged terms of this kind
+     * @param scope          {@code explained} or {@code corpus} (with {@code --scrub-all})
+     * @param documents      documents rewritten (those the scrub changed)
+     * @param flips          of those, documents whose predicted label changed
+     * @param flipRate       {@code flips / documents}
+     * @param scoreDrop      mean drop of the originally predicted label's score
+     * @param accuracyBefore accuracy on those documents before the rewrite, or {@code null}
+     * @param accuracyAfter  accuracy after it, or {@code null}
+     */
+    public record Scrub(
+            ArtefactKind kind,
+            String mode,
+            List<String> terms,
+            String scope,
+            int documents,
+            int flips,
+            double flipRate,
+            double scoreDrop,
+            Double accuracyBefore,
+            Double accuracyAfter) {
+
+        public Scrub {
+            Objects.requireNonNull(kind, "kind");
+            terms = List.copyOf(terms);
+        }
+    }
+}

@@ -1,0 +1,46 @@
+package org.telltale.audit;
+
+import java.util.Objects;
+
+/**
+ * The knobs of one audit that decide its result, recorded in {@code audit.json} and checked on
+ * {@code --resume} so that a resumed run cannot silently mix two configurations.
+ *
+ * @param sample   how many documents to explain (N), stratified
+ * @param probes   the probe budget of each explanation
+ * @param words    how many terms each explanation selects (K)
+ * @param picks    how many documents the submodular pick chooses for the reviewer (B)
+ * @param scrubAll whether the scrub test rewrites the whole corpus, not only the explained documents
+ * @param failOn   {@code high}, {@code medium}, {@code low} or {@code never}: the gate for exit code 3
+ * @param alpha    the family-wise significance level before the Bonferroni correction
+ * @param batch    how many documents one scoring call carries while the corpus is scored
+ * @param analyzer the analyzer name that cut texts into terms
+ * @param policy   the policy file's name, or {@code null}
+ */
+public record AuditSettings(
+        int sample,
+        int probes,
+        int words,
+        int picks,
+        boolean scrubAll,
+        String failOn,
+        double alpha,
+        int batch,
+        String analyzer,
+        String policy) {
+
+    /** The family-wise level a finding's association must pass, before the Bonferroni division. */
+    public static final double DEFAULT_ALPHA = 0.05;
+
+    public AuditSettings {
+        Objects.requireNonNull(failOn, "failOn");
+        Objects.requireNonNull(analyzer, "analyzer");
+        if (sample < 1 || probes < 2 || words < 1 || picks < 0 || batch < 1) {
+            throw new IllegalArgumentException("audit settings out of range: sample=" + sample + ", probes=" + probes
+                    + ", words=" + words + ", picks=" + picks + ", batch=" + batch);
+        }
+        if (!(alpha > 0 && alpha < 1)) {
+            throw new IllegalArgumentException("alpha must lie in (0, 1): " + alpha);
+        }
+    }
+}
