@@ -36,7 +36,7 @@ public final class Analyzers {
             case "standard" -> standard();
             case "english" -> english();
             case "whitespace" -> whitespace();
-            default -> throw new IllegalArgumentException(
+            default -> throw new org.telltale.UsageException(
                     "unknown analyzer '" + name + "' (expected standard, english or whitespace)");
         };
     }

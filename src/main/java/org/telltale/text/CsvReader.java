@@ -1,0 +1,142 @@
+package org.telltale.text;
+
+import java.io.BufferedInputStream;
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.UncheckedIOException;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Iterator;
+import java.util.Map;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.telltale.TelltaleException;
+
+/**
+ * CSV with a header row, parsed by Commons CSV in its RFC 4180 dialect: comma-separated,
+ * double-quoted fields may hold commas, line breaks and doubled quotes; LF, CRLF and CR all end
+ * records. The header names the columns; the text column must exist, id and label columns are
+ * optional. Strictly UTF-8, with an optional byte-order mark.
+ *
+ * <p>Broken quoting and invalid UTF-8 stop the read even with skip-bad: after them the parser
+ * cannot know where the next record starts, so skipping would guess.
+ */
+final class CsvReader extends CorpusReader {
+    private static final CSVFormat FORMAT = CSVFormat.RFC4180.builder()
+            .setHeader()
+            .setSkipHeaderRecord(true)
+            .setIgnoreEmptyLines(false)
+            .get();
+
+    private final String file;
+    private final CSVParser parser;
+    private final Iterator<CSVRecord> records;
+    private final Integer idColumn;
+    private final int textColumn;
+    private final Integer labelColumn;
+    private final CorpusSettings settings;
+    private final int columns;
+    private long lineAfterPrevious;
+    private long rows;
+
+    CsvReader(Path path, CorpusSettings settings) throws IOException {
+        super(path, CorpusFormat.CSV, settings.skipBad(), "row");
+        this.file = path.toString();
+        this.settings = settings;
+        InputStream in = new BufferedInputStream(Files.newInputStream(path), 1 << 16);
+        try {
+            skipByteOrderMark(in);
+            BufferedReader reader = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8.newDecoder()
+                    .onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT)), 1 << 16);
+            this.parser = CSVParser.parse(reader, FORMAT);
+        } catch (CharacterCodingException e) {
+            in.close();
+            throw new TelltaleException(file + ":1: invalid UTF-8 in the header (Telltale reads UTF-8 only)");
+        } catch (IOException | IllegalArgumentException | UncheckedIOException e) {
+            in.close();
+            throw new TelltaleException(file + ":1: cannot read the CSV header: " + e.getMessage(), e);
+        }
+        Map<String, Integer> header = parser.getHeaderMap();
+        if (header == null || !header.containsKey(settings.textField())) {
+            parser.close();
+            throw new TelltaleException(file + ": the header has no column '" + settings.textField() + "' (columns: "
+                    + (header == null ? "none" : String.join(", ", header.keySet())) + "); choose one with --text-field");
+        }
+        this.columns = header.size();
+        this.textColumn = header.get(settings.textField());
+        this.idColumn = header.get(settings.idField());
+        this.labelColumn = header.get(settings.labelField());
+        this.lineAfterPrevious = parser.getCurrentLineNumber();
+        this.records = parser.iterator();
+    }
+
+    private void skipByteOrderMark(InputStream in) throws IOException {
+        in.mark(4);
+        byte[] head = in.readNBytes(4);
+        in.reset();
+        Utf8.refuseOtherEncodings(head, head.length, file);
+        in.skipNBytes(Utf8.bomLength(head, head.length));
+    }
+
+    @Override
+    Document readNext() {
+        while (true) {
+            CSVRecord record;
+            try {
+                if (!records.hasNext()) {
+                    return null;
+                }
+                record = records.next();
+            } catch (UncheckedIOException e) {
+                String where = file + ":" + (lineAfterPrevious + 1);
+                if (e.getCause() instanceof CharacterCodingException) {
+                    throw new TelltaleException(where + ": invalid UTF-8 (Telltale reads UTF-8 only; CSV reading cannot resume after it)");
+                }
+                throw new TelltaleException(where + ": broken CSV quoting: " + e.getCause().getMessage()
+                        + " (RFC 4180: a quoted field ends with a quote followed by a comma or a line end; quotes inside are doubled)");
+            }
+            long firstLine = lineAfterPrevious + 1;
+            lineAfterPrevious = parser.getCurrentLineNumber();
+            if (record.size() == 1 && columns > 1 && record.get(0).isEmpty()) {
+                continue; // a blank line holds no record
+            }
+            rows++;
+            String place = file + ":" + firstLine;
+            String id = cell(record, idColumn);
+            if (id != null && id.isEmpty()) {
+                id = null;
+            }
+            String where = id == null ? place : place + " (id '" + id + "')";
+            String text = cell(record, textColumn);
+            if (text == null) {
+                throw new BadRecord(SkipReason.MISSING_TEXT, where + ": the row has " + record.size()
+                        + " fields and none for column '" + settings.textField() + "'");
+            }
+            String label = cell(record, labelColumn);
+            if (label != null && label.isEmpty()) {
+                label = null;
+            }
+            return new Document(id == null ? "row-" + rows : id, text, label, place);
+        }
+    }
+
+    private static String cell(CSVRecord record, Integer column) {
+        return column == null || column >= record.size() ? null : record.get(column);
+    }
+
+    @Override
+    public void close() {
+        try {
+            parser.close();
+        } catch (IOException e) {
+            // Nothing is written; a failed close of an input file loses nothing.
+        }
+    }
+}
