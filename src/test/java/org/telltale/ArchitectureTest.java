@@ -25,7 +25,8 @@ class ArchitectureTest {
             "audit", List.of("connect", "report", "serve", "cli"),
             "overlap", List.of("explain", "audit", "report", "serve", "cli", "connect"),
             "report", List.of("connect", "serve", "cli"),
-            "serve", List.of("explain", "audit", "overlap", "report", "cli"));
+            "serve", List.of("explain", "audit", "overlap", "report", "cli"),
+            "demo", List.of("cli"));
 
     @Test
     void picocliIsImportedOnlyInCli() throws IOException {
