@@ -1,0 +1,105 @@
+package org.telltale.report.html;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.telltale.explain.Explanation;
+
+/** Builds the {@link DocumentView} of an explanation: formats numbers, tints and marks. */
+final class DocumentViews {
+    private static final double WHISKER_MARGIN = 4;
+
+    private DocumentViews() {
+    }
+
+    static DocumentView of(Explanation e, String anchor) {
+        List<Explanation.TermWeight> terms = e.terms();
+        int[] levels = levels(terms);
+        double scale = intervalScale(terms);
+        List<DocumentView.LedgerRow> rows = new ArrayList<>(terms.size());
+        int spanCount = 0;
+        for (int i = 0; i < terms.size(); i++) {
+            Explanation.TermWeight t = terms.get(i);
+            spanCount += t.spans().size();
+            rows.add(row(i, t, levels[i], scale, e.label()));
+        }
+        List<MarkedText.Segment> segments = e.text() == null ? null : MarkedText.of(e.id(), e.text(), terms, levels);
+        double r2 = e.fit() == null ? Double.NaN : e.fit().r2();
+        double r2Clamped = Double.isNaN(r2) ? 0 : Math.max(0, Math.min(1, r2));
+        return new DocumentView(
+                anchor,
+                e.id(),
+                e.label(),
+                e.predicted() == null ? e.label() : e.predicted(),
+                e.gold(),
+                Numbers.plain(e.score(), 3),
+                bars(e),
+                e.probes(),
+                Numbers.plain(r2, 3),
+                Numbers.coord(r2Clamped * 100),
+                e.fit() == null ? "n/a" : Numbers.signed(e.fit().intercept()),
+                e.fit() == null ? "n/a" : Numbers.plain(e.fit().prediction(), 3),
+                List.copyOf(rows),
+                segments,
+                spanCount,
+                e.text() == null ? 0 : e.text().length());
+    }
+
+    /**
+     * Tint level of each term: its absolute weight against the largest in the document, in
+     * {@link Palette#LEVELS} equal steps, so the strongest term of every document is deepest.
+     */
+    static int[] levels(List<Explanation.TermWeight> terms) {
+        double max = 0;
+        for (Explanation.TermWeight t : terms) {
+            max = Math.max(max, Math.abs(t.weight()));
+        }
+        int[] levels = new int[terms.size()];
+        for (int i = 0; i < levels.length; i++) {
+            double share = max == 0 ? 0 : Math.abs(terms.get(i).weight()) / max;
+            levels[i] = Math.max(1, Math.min(Palette.LEVELS, (int) Math.ceil(share * Palette.LEVELS)));
+        }
+        return levels;
+    }
+
+    private static double intervalScale(List<Explanation.TermWeight> terms) {
+        double max = 0;
+        for (Explanation.TermWeight t : terms) {
+            max = Math.max(max, Math.max(Math.abs(t.low()), Math.max(Math.abs(t.high()), Math.abs(t.weight()))));
+        }
+        return max == 0 || Double.isNaN(max) ? 1 : max;
+    }
+
+    private static DocumentView.LedgerRow row(int i, Explanation.TermWeight t, int level, double scale, String label) {
+        boolean toward = t.weight() >= 0;
+        int n = t.spans().size();
+        String weight = Numbers.signed(t.weight());
+        String low = Numbers.signed(t.low());
+        String high = Numbers.signed(t.high());
+        String description = "weight " + weight + ", interval " + low + " to " + high + ", "
+                + (toward ? "toward " : "away from ") + label + ", " + n + (n == 1 ? " occurrence" : " occurrences");
+        return new DocumentView.LedgerRow(i, t.term(), weight, low, high, n, toward, level,
+                x(0, scale), x(t.low(), scale), x(t.high(), scale), x(t.weight(), scale), description);
+    }
+
+    private static String x(double v, double scale) {
+        double clamped = Double.isNaN(v) ? 0 : Math.max(-scale, Math.min(scale, v));
+        return Numbers.coord(50 + (50 - WHISKER_MARGIN) * clamped / scale);
+    }
+
+    private static List<DocumentView.LabelBar> bars(Explanation e) {
+        Map<String, Double> scores = e.scores() == null || e.scores().isEmpty()
+                ? Map.of(e.label(), e.score()) : e.scores();
+        boolean probabilities = scores.values().stream().allMatch(s -> s >= 0 && s <= 1);
+        double max = scores.values().stream().mapToDouble(Math::abs).max().orElse(1);
+        double denominator = probabilities || max == 0 ? 1 : max;
+        String predicted = e.predicted() == null ? e.label() : e.predicted();
+        List<DocumentView.LabelBar> bars = new ArrayList<>();
+        for (Map.Entry<String, Double> s : scores.entrySet()) {
+            double width = Math.abs(s.getValue()) / denominator * 100;
+            bars.add(new DocumentView.LabelBar(s.getKey(), Numbers.plain(s.getValue(), 3), Numbers.coord(width),
+                    s.getKey().equals(e.label()), s.getKey().equals(predicted)));
+        }
+        return List.copyOf(bars);
+    }
+}

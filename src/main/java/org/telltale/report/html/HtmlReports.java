@@ -1,0 +1,93 @@
+package org.telltale.report.html;
+
+import gg.jte.ContentType;
+import gg.jte.TemplateEngine;
+import gg.jte.TemplateOutput;
+import gg.jte.output.StringOutput;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Properties;
+import org.telltale.TelltaleException;
+import org.telltale.explain.Explanation;
+
+/**
+ * Renders Telltale's self-contained HTML reports from result values: one file, inline CSS and
+ * SVG, one small script allowed by its hash, no network. Templates are precompiled jte templates
+ * with HTML content type, so every value is escaped for the context it lands in.
+ *
+ * <p>Thread-safe: the engine and assets are immutable.
+ */
+public final class HtmlReports {
+    private static final TemplateEngine ENGINE = TemplateEngine.createPrecompiled(
+            null, ContentType.Html, null, "org.telltale.report.html.templates");
+
+    private HtmlReports() {
+    }
+
+    /** The document report of one or more explanations, each shown as a highlighted document view. */
+    public static String explanations(List<Explanation> explanations) {
+        List<DocumentView> views = new ArrayList<>(explanations.size());
+        for (int i = 0; i < explanations.size(); i++) {
+            views.add(DocumentViews.of(explanations.get(i), "doc-" + i));
+        }
+        String title = explanations.size() == 1
+                ? "Telltale explanation of " + explanations.get(0).id()
+                : "Telltale explanations of " + explanations.size() + " documents";
+        String subtitle = explanations.size() == 1 ? "1 document" : explanations.size() + " documents";
+        return render("explanations.jte", Map.of("page", page("Explanations", title, subtitle), "documents", views));
+    }
+
+    /**
+     * Writes a rendered report as UTF-8. An existing file is replaced only with {@code force}; the
+     * file appears whole or not at all (written beside it, then moved).
+     */
+    public static void write(String html, Path out, boolean force) {
+        if (Files.exists(out) && !force) {
+            throw new TelltaleException(out + ": file exists; pass --force to replace it");
+        }
+        try {
+            Path parent = out.toAbsolutePath().getParent();
+            Files.createDirectories(parent);
+            Path temp = Files.createTempFile(parent, ".telltale-report", ".tmp");
+            try {
+                Files.writeString(temp, html, StandardCharsets.UTF_8);
+                Files.move(temp, out, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+            } finally {
+                Files.deleteIfExists(temp);
+            }
+        } catch (IOException e) {
+            throw new TelltaleException(out + ": cannot write report: " + e.getMessage(), e);
+        }
+    }
+
+    static Page page(String kind, String title, String subtitle) {
+        return new Page(kind, title, subtitle, version(), InlineAssets.csp(), InlineAssets.style(), InlineAssets.script());
+    }
+
+    static String render(String template, Map<String, Object> params) {
+        TemplateOutput out = new StringOutput(1 << 16);
+        ENGINE.render(template, params, out);
+        return out.toString();
+    }
+
+    private static String version() {
+        try (InputStream in = HtmlReports.class.getResourceAsStream("/org/telltale/version.properties")) {
+            if (in == null) {
+                return "unknown";
+            }
+            Properties p = new Properties();
+            p.load(in);
+            return p.getProperty("version", "unknown");
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

@@ -1,0 +1,37 @@
+package org.telltale.report.html;
+
+import java.util.Locale;
+
+/** Number formats of the reports, fixed to {@code Locale.ROOT} so a report reads the same everywhere. */
+final class Numbers {
+    private Numbers() {
+    }
+
+    /** A weight with its sign, e.g. {@code +0.213} or {@code −0.048} (with a true minus sign). */
+    static String signed(double value) {
+        if (Double.isNaN(value)) {
+            return "n/a";
+        }
+        String s = String.format(Locale.ROOT, "%+.3f", value);
+        return s.startsWith("-") ? "\u2212" + s.substring(1) : s;
+    }
+
+    static String plain(double value, int decimals) {
+        if (Double.isNaN(value)) {
+            return "n/a";
+        }
+        return String.format(Locale.ROOT, "%." + decimals + "f", value);
+    }
+
+    static String percent(double share) {
+        if (Double.isNaN(share)) {
+            return "n/a";
+        }
+        return String.format(Locale.ROOT, "%.1f%%", share * 100);
+    }
+
+    /** A coordinate for an SVG attribute: two decimals, never a locale's decimal comma. */
+    static String coord(double value) {
+        return String.format(Locale.ROOT, "%.2f", value);
+    }
+}
