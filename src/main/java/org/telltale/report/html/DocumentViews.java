@@ -28,10 +28,10 @@ final class DocumentViews {
         double r2Clamped = Double.isNaN(r2) ? 0 : Math.max(0, Math.min(1, r2));
         return new DocumentView(
                 anchor,
-                e.id(),
-                e.label(),
-                e.predicted() == null ? e.label() : e.predicted(),
-                e.gold(),
+                VisibleText.inline(e.id()),
+                VisibleText.inline(e.label()),
+                VisibleText.inline(e.predicted() == null ? e.label() : e.predicted()),
+                VisibleText.inline(e.gold()),
                 Numbers.plain(e.score(), 3),
                 bars(e),
                 e.probes(),
@@ -77,8 +77,8 @@ final class DocumentViews {
         String low = Numbers.signed(t.low());
         String high = Numbers.signed(t.high());
         String description = "weight " + weight + ", interval " + low + " to " + high + ", "
-                + (toward ? "toward " : "away from ") + label + ", " + n + (n == 1 ? " occurrence" : " occurrences");
-        return new DocumentView.LedgerRow(i, t.term(), weight, low, high, n, toward, level,
+                + (toward ? "toward " : "away from ") + VisibleText.inline(label) + ", " + n + (n == 1 ? " occurrence" : " occurrences");
+        return new DocumentView.LedgerRow(i, VisibleText.inline(t.term()), weight, low, high, n, toward, level,
                 x(0, scale), x(t.low(), scale), x(t.high(), scale), x(t.weight(), scale), description);
     }
 
@@ -97,7 +97,7 @@ final class DocumentViews {
         List<DocumentView.LabelBar> bars = new ArrayList<>();
         for (Map.Entry<String, Double> s : scores.entrySet()) {
             double width = Math.abs(s.getValue()) / denominator * 100;
-            bars.add(new DocumentView.LabelBar(s.getKey(), Numbers.plain(s.getValue(), 3), Numbers.coord(width),
+            bars.add(new DocumentView.LabelBar(VisibleText.inline(s.getKey()), Numbers.plain(s.getValue(), 3), Numbers.coord(width),
                     s.getKey().equals(e.label()), s.getKey().equals(predicted)));
         }
         return List.copyOf(bars);

@@ -39,7 +39,7 @@ public final class HtmlReports {
             views.add(DocumentViews.of(explanations.get(i), "doc-" + i));
         }
         String title = explanations.size() == 1
-                ? "Telltale explanation of " + explanations.get(0).id()
+                ? "Telltale explanation of " + VisibleText.inline(explanations.get(0).id())
                 : "Telltale explanations of " + explanations.size() + " documents";
         String subtitle = explanations.size() == 1 ? "1 document" : explanations.size() + " documents";
         return render("explanations.jte", Map.of("page", page("Explanations", title, subtitle), "documents", views));

@@ -41,6 +41,31 @@ public final class VisibleText {
         return chunks;
     }
 
+    /**
+     * A short string (id, label, term) with every hidden character written out as
+     * {@code [RLO U+202E]}, for places where a badge would be too heavy.
+     */
+    public static String inline(String text) {
+        if (text == null) {
+            return null;
+        }
+        StringBuilder out = null;
+        for (int i = 0; i < text.length(); i++) {
+            String name = hiddenName(text.charAt(i));
+            if (name != null && out == null) {
+                out = new StringBuilder(text.length() + 16).append(text, 0, i);
+            }
+            if (out != null) {
+                if (name == null) {
+                    out.append(text.charAt(i));
+                } else {
+                    out.append('[').append(name).append(']');
+                }
+            }
+        }
+        return out == null ? text : out.toString();
+    }
+
     /** The visible name of a character that must not act unseen, or {@code null} for ordinary text. */
     static String hiddenName(char c) {
         String abbr = switch (c) {
