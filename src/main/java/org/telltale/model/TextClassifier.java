@@ -19,6 +19,19 @@ public interface TextClassifier extends AutoCloseable {
      */
     ScoreMatrix score(List<String> texts);
 
+    /**
+     * Scores {@code texts} like {@link #score(List)}; {@code ids} (one per text, or null) name the
+     * documents in error messages, e.g. the first document whose scores fail validation.
+     */
+    default ScoreMatrix score(List<String> texts, List<String> ids) {
+        return score(texts);
+    }
+
+    /** How many requests this classifier has retried so far (0 for in-process models); for run summaries. */
+    default long retries() {
+        return 0;
+    }
+
     /** A short description for logs and reports, e.g. the file name or URL; never a secret. */
     String describe();
 

@@ -1,0 +1,114 @@
+package org.telltale.cli;
+
+import java.time.Duration;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.telltale.UsageException;
+import org.telltale.connect.ConnectorSettings;
+import org.telltale.connect.Connectors;
+import org.telltale.connect.Durations;
+import org.telltale.connect.Protocol;
+import org.telltale.connect.ScoreKind;
+import org.telltale.model.TextClassifier;
+import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.Option;
+
+/**
+ * The options of every command that talks to a model: {@code --model SPEC} and how to reach it.
+ * Use as {@code @Mixin ModelOptions model;} and call {@link #open()}; close what it returns.
+ */
+public final class ModelOptions {
+    @Option(names = "--model", paramLabel = "SPEC", required = true,
+            description = "The model: a model file (built-in, in process), an http:// or https:// URL, "
+                    + "or exec:COMMAND ARGS… (a subprocess speaking the scoring protocol line by line).")
+    String spec;
+
+    @Option(names = "--protocol", paramLabel = "NAME", defaultValue = "native", converter = ProtocolConverter.class,
+            description = "For URLs: native (our scoring protocol), open-inference (SPEC is …/v2/models/NAME) "
+                    + "or instances ({\"instances\"} → {\"predictions\"}). Default: ${DEFAULT-VALUE}.")
+    Protocol protocol;
+
+    @Option(names = "--batch", paramLabel = "N", defaultValue = "64",
+            description = "Most texts per request. Default: ${DEFAULT-VALUE}.")
+    int batch;
+
+    @Option(names = "--parallel", paramLabel = "N", defaultValue = "0",
+            description = "Requests in flight (subprocesses for exec:). Default: 4 for URLs, 1 for exec:, "
+                    + "up to 4 threads for model files.")
+    int parallel;
+
+    @Option(names = "--timeout", paramLabel = "DURATION", defaultValue = "30s", converter = DurationConverter.class,
+            description = "How long one request may take, e.g. 500ms, 30s, 2m. Default: ${DEFAULT-VALUE}.")
+    Duration timeout;
+
+    @Option(names = "--retries", paramLabel = "N", defaultValue = "3",
+            description = "Retries of a request after a timeout, a reset connection, HTTP 429 or 5xx, "
+                    + "or a subprocess that died, with exponential backoff and jitter. Default: ${DEFAULT-VALUE}.")
+    int retries;
+
+    @Option(names = "--header", paramLabel = "NAME=ENVVAR",
+            description = "Send header NAME with the value of environment variable ENVVAR (repeatable). "
+                    + "The value is never printed, logged or written.")
+    Map<String, String> headers = new LinkedHashMap<>();
+
+    @Option(names = "--scores", paramLabel = "KIND", defaultValue = "probabilities", converter = ScoreKindConverter.class,
+            description = "What the model answers: probabilities, or logits (passed through a softmax). "
+                    + "Default: ${DEFAULT-VALUE}.")
+    ScoreKind scores;
+
+    @Option(names = "--labels", paramLabel = "A,B,…", split = ",",
+            description = "Label names for services that answer bare rows of numbers (instances, open-inference "
+                    + "without label metadata).")
+    List<String> labels = List.of();
+
+    /** The settings these options describe; a bad combination is a usage error. */
+    public ConnectorSettings settings() {
+        if (batch < 1) {
+            throw new UsageException("--batch must be at least 1: " + batch);
+        }
+        if (parallel < 0) {
+            throw new UsageException("--parallel must be at least 1: " + parallel);
+        }
+        if (retries < 0) {
+            throw new UsageException("--retries must be 0 or more: " + retries);
+        }
+        if (timeout.isZero() || timeout.isNegative()) {
+            throw new UsageException("--timeout must be positive: " + Durations.format(timeout));
+        }
+        return ConnectorSettings.of(spec).withProtocol(protocol).withBatch(batch).withParallel(parallel)
+                .withTimeout(timeout).withRetries(retries).withHeaders(headers).withScores(scores)
+                .withLabels(labels == null ? List.of() : labels);
+    }
+
+    /** Opens the connector; the caller closes it. */
+    public TextClassifier open() {
+        return Connectors.open(settings());
+    }
+
+    /** The spec as given, for messages. */
+    public String spec() {
+        return spec;
+    }
+
+    static final class ProtocolConverter implements ITypeConverter<Protocol> {
+        @Override
+        public Protocol convert(String value) {
+            return Protocol.byName(value);
+        }
+    }
+
+    static final class ScoreKindConverter implements ITypeConverter<ScoreKind> {
+        @Override
+        public ScoreKind convert(String value) {
+            return ScoreKind.byName(value);
+        }
+    }
+
+    static final class DurationConverter implements ITypeConverter<Duration> {
+        @Override
+        public Duration convert(String value) {
+            return Durations.parse(value);
+        }
+    }
+}

@@ -1,0 +1,151 @@
+package org.telltale.connect;
+
+import java.time.Duration;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.function.UnaryOperator;
+
+/**
+ * Everything {@link Connectors#open} needs to reach a model: the {@code --model} spec and the
+ * connector options.
+ *
+ * @param spec        a model file path, an {@code http://}/{@code https://} URL, or {@code exec:COMMAND ARGS…}
+ * @param protocol    the JSON exchange for URLs; ignored for files and subprocesses
+ * @param batch       most texts per request (≥ 1)
+ * @param parallel    requests in flight (≥ 1), or 0 for a default that suits the connector
+ * @param timeout     how long one request may take before it is abandoned (and retried)
+ * @param retries     how many times a failed request is retried (≥ 0)
+ * @param headers     HTTP header name → name of the environment variable holding its value
+ * @param scores      whether the model answers probabilities or logits
+ * @param labels      label names for services that answer bare rows of numbers (may be empty)
+ * @param backoff     the first retry delay; later ones double, with jitter
+ * @param maxRestarts how many times a subprocess may be restarted over the connector's life
+ * @param environment looks up environment variables (the process environment unless a test says otherwise)
+ */
+public record ConnectorSettings(
+        String spec,
+        Protocol protocol,
+        int batch,
+        int parallel,
+        Duration timeout,
+        int retries,
+        Map<String, String> headers,
+        ScoreKind scores,
+        List<String> labels,
+        Duration backoff,
+        int maxRestarts,
+        UnaryOperator<String> environment) {
+
+    public static final int DEFAULT_BATCH = 64;
+    public static final Duration DEFAULT_TIMEOUT = Duration.ofSeconds(30);
+    public static final int DEFAULT_RETRIES = 3;
+    public static final Duration DEFAULT_BACKOFF = Duration.ofMillis(200);
+    public static final int DEFAULT_MAX_RESTARTS = 10;
+
+    public ConnectorSettings {
+        Objects.requireNonNull(spec, "spec");
+        Objects.requireNonNull(protocol, "protocol");
+        Objects.requireNonNull(timeout, "timeout");
+        Objects.requireNonNull(scores, "scores");
+        Objects.requireNonNull(backoff, "backoff");
+        Objects.requireNonNull(environment, "environment");
+        if (spec.isBlank()) {
+            throw new IllegalArgumentException("the model spec is empty");
+        }
+        if (batch < 1) {
+            throw new IllegalArgumentException("batch must be at least 1: " + batch);
+        }
+        if (parallel < 0) {
+            throw new IllegalArgumentException("parallel must be 0 (default) or more: " + parallel);
+        }
+        if (retries < 0) {
+            throw new IllegalArgumentException("retries must be 0 or more: " + retries);
+        }
+        if (maxRestarts < 0) {
+            throw new IllegalArgumentException("maxRestarts must be 0 or more: " + maxRestarts);
+        }
+        if (timeout.isNegative() || timeout.isZero()) {
+            throw new IllegalArgumentException("timeout must be positive: " + timeout);
+        }
+        headers = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(headers));
+        labels = List.copyOf(labels);
+    }
+
+    /** Defaults for everything but the spec: native protocol, batch 64, 30 s timeout, 3 retries. */
+    public static ConnectorSettings of(String spec) {
+        return new ConnectorSettings(spec, Protocol.NATIVE, DEFAULT_BATCH, 0, DEFAULT_TIMEOUT, DEFAULT_RETRIES,
+                Map.of(), ScoreKind.PROBABILITIES, List.of(), DEFAULT_BACKOFF, DEFAULT_MAX_RESTARTS, System::getenv);
+    }
+
+    public ConnectorSettings withProtocol(Protocol p) {
+        return new ConnectorSettings(spec, p, batch, parallel, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
+    }
+
+    public ConnectorSettings withBatch(int n) {
+        return new ConnectorSettings(spec, protocol, n, parallel, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
+    }
+
+    public ConnectorSettings withParallel(int n) {
+        return new ConnectorSettings(spec, protocol, batch, n, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
+    }
+
+    public ConnectorSettings withTimeout(Duration d) {
+        return new ConnectorSettings(spec, protocol, batch, parallel, d, retries, headers, scores, labels, backoff, maxRestarts, environment);
+    }
+
+    public ConnectorSettings withRetries(int n) {
+        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, n, headers, scores, labels, backoff, maxRestarts, environment);
+    }
+
+    public ConnectorSettings withHeaders(Map<String, String> h) {
+        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, h, scores, labels, backoff, maxRestarts, environment);
+    }
+
+    public ConnectorSettings withScores(ScoreKind k) {
+        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, headers, k, labels, backoff, maxRestarts, environment);
+    }
+
+    public ConnectorSettings withLabels(List<String> l) {
+        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, headers, scores, l, backoff, maxRestarts, environment);
+    }
+
+    public ConnectorSettings withBackoff(Duration d) {
+        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, headers, scores, labels, d, maxRestarts, environment);
+    }
+
+    public ConnectorSettings withMaxRestarts(int n) {
+        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, headers, scores, labels, backoff, n, environment);
+    }
+
+    public ConnectorSettings withEnvironment(UnaryOperator<String> env) {
+        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, headers, scores, labels, backoff, maxRestarts, env);
+    }
+
+    /** The connector this spec selects. */
+    public Kind kind() {
+        if (spec.startsWith("exec:")) {
+            return Kind.SUBPROCESS;
+        }
+        if (spec.startsWith("http://") || spec.startsWith("https://")) {
+            return Kind.HTTP;
+        }
+        return Kind.FILE;
+    }
+
+    /** {@link #parallel} with 0 resolved to a default that suits the connector. */
+    public int effectiveParallel() {
+        if (parallel > 0) {
+            return parallel;
+        }
+        return switch (kind()) {
+            case HTTP -> 4;
+            case SUBPROCESS -> 1;
+            case FILE -> Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
+        };
+    }
+
+    /** The three ways to reach a model. */
+    public enum Kind { FILE, HTTP, SUBPROCESS }
+}

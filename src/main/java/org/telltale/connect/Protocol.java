@@ -1,0 +1,28 @@
+package org.telltale.connect;
+
+import java.util.Locale;
+
+/** The JSON exchange an HTTP connector speaks with a model service. */
+public enum Protocol {
+    /** Telltale's scoring protocol: {@code {"texts": […]}} → {@code {"labels": […], "scores": [[…]]}}. */
+    NATIVE,
+    /** Open Inference Protocol v2: a BYTES input tensor of texts, an FP32 output tensor [n, labels]. */
+    OPEN_INFERENCE,
+    /** The common {@code {"instances": […]}} → {@code {"predictions": […]}} shape. */
+    INSTANCES;
+
+    /** The name used on the command line and in docs, e.g. {@code open-inference}. */
+    public String cliName() {
+        return name().toLowerCase(Locale.ROOT).replace('_', '-');
+    }
+
+    /** Parses {@code native}, {@code open-inference} or {@code instances}, ignoring case. */
+    public static Protocol byName(String name) {
+        for (Protocol p : values()) {
+            if (p.cliName().equalsIgnoreCase(name.strip())) {
+                return p;
+            }
+        }
+        throw new IllegalArgumentException("unknown protocol '" + name + "' (expected native, open-inference or instances)");
+    }
+}

@@ -1,0 +1,28 @@
+package org.telltale.connect;
+
+/**
+ * Turns a row of logits into probabilities: {@code exp(x_i - max) / Σ exp(x_j - max)}. Subtracting
+ * the maximum first keeps large logits from overflowing (common practice; Goodfellow, Bengio and
+ * Courville, Deep Learning, 2016, §4.1).
+ */
+final class Softmax {
+    private Softmax() {
+    }
+
+    static double[] of(double[] logits) {
+        double max = Double.NEGATIVE_INFINITY;
+        for (double v : logits) {
+            max = Math.max(max, v);
+        }
+        double[] out = new double[logits.length];
+        double sum = 0;
+        for (int i = 0; i < logits.length; i++) {
+            out[i] = Math.exp(logits[i] - max);
+            sum += out[i];
+        }
+        for (int i = 0; i < out.length; i++) {
+            out[i] /= sum;
+        }
+        return out;
+    }
+}

@@ -1,0 +1,132 @@
+package org.telltale.connect;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.junit.jupiter.api.Test;
+import org.telltale.model.ClassifierException;
+import org.telltale.model.ScoreMatrix;
+import org.telltale.model.TextClassifier;
+
+class ChunkedClassifierTest {
+
+    private static List<String> texts(int n) {
+        List<String> t = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            t.add("x".repeat(i % 37) + "#" + i);
+        }
+        return t;
+    }
+
+    @Test
+    void splitsIntoBatchesAndReassemblesInOrder() {
+        LengthModel model = new LengthModel();
+        try (TextClassifier c = Connectors.inProcess(model, ConnectorSettings.of("mem").withBatch(7).withParallel(3))) {
+            List<String> in = texts(100);
+            ScoreMatrix m = c.score(in);
+            assertEquals(100, m.size());
+            assertEquals(LengthModel.LABELS, m.labels());
+            for (int i = 0; i < in.size(); i++) {
+                assertArrayEquals(LengthModel.expected(in.get(i)), m.row(i), "row " + i);
+            }
+            assertEquals(15, model.calls.get()); // ceil(100 / 7)
+        }
+    }
+
+    @Test
+    void keepsTheParallelLimitOfCallsInFlight() {
+        LengthModel model = new LengthModel(30);
+        try (TextClassifier c = Connectors.inProcess(model, ConnectorSettings.of("mem").withBatch(1).withParallel(3))) {
+            c.score(texts(24));
+            assertEquals(3, model.maxInFlight.get());
+        }
+    }
+
+    @Test
+    void emptyInputAsksNothing() {
+        LengthModel model = new LengthModel();
+        try (TextClassifier c = Connectors.inProcess(model, ConnectorSettings.of("mem"))) {
+            assertEquals(0, c.score(List.of()).size());
+            assertEquals(0, model.calls.get());
+        }
+    }
+
+    /** A scorer that fails transiently a fixed number of times, then answers. */
+    private static final class Flaky implements BatchScorer {
+        final AtomicInteger failuresLeft;
+
+        Flaky(int failures) {
+            failuresLeft = new AtomicInteger(failures);
+        }
+
+        @Override
+        public RawScores score(List<String> texts) {
+            if (failuresLeft.getAndDecrement() > 0) {
+                throw new TransientFailure("HTTP 503 from test");
+            }
+            double[][] rows = new double[texts.size()][];
+            for (int i = 0; i < rows.length; i++) {
+                rows[i] = LengthModel.expected(texts.get(i));
+            }
+            return new RawScores(LengthModel.LABELS, rows, "{}");
+        }
+
+        @Override
+        public String describe() {
+            return "flaky";
+        }
+    }
+
+    private static ConnectorSettings fast(int retries) {
+        return ConnectorSettings.of("test").withRetries(retries).withBackoff(Duration.ofMillis(1)).withParallel(1);
+    }
+
+    @Test
+    void retriesTransientFailuresAndCountsThem() {
+        try (var c = new ChunkedClassifier(new Flaky(2), fast(3), Redactor.none(), "flaky")) {
+            ScoreMatrix m = c.score(List.of("a", "bb"));
+            assertArrayEquals(LengthModel.expected("bb"), m.row(1));
+            assertEquals(2, c.retries());
+        }
+    }
+
+    @Test
+    void givesUpAfterTheRetryBudgetNamingTheBatch() {
+        try (var c = new ChunkedClassifier(new Flaky(10), fast(2), Redactor.none(), "flaky")) {
+            var e = assertThrows(ClassifierException.class, () -> c.score(List.of("a", "b")));
+            assertEquals("batch 1 (documents 0–1): HTTP 503 from test (after 2 retries)", e.getMessage());
+            assertEquals(2, c.retries());
+        }
+    }
+
+    @Test
+    void aValidationErrorNamesTheDocumentIdTheCallerGave() {
+        BatchScorer nan = new BatchScorer() {
+            @Override
+            public RawScores score(List<String> texts) {
+                double[][] rows = new double[texts.size()][];
+                for (int i = 0; i < rows.length; i++) {
+                    rows[i] = texts.get(i).equals("bad") ? new double[] {Double.NaN, 0.5} : new double[] {0.5, 0.5};
+                }
+                return new RawScores(LengthModel.LABELS, rows, "{\"scores\":[…]}");
+            }
+
+            @Override
+            public String describe() {
+                return "nan";
+            }
+        };
+        try (var c = new ChunkedClassifier(nan, fast(0).withBatch(2), Redactor.none(), "nan")) {
+            var e = assertThrows(ClassifierException.class,
+                    () -> c.score(List.of("a", "b", "c", "bad"), List.of("d1", "d2", "d3", "d4")));
+            assertTrue(e.getMessage().startsWith("batch 2 (documents 2–3): the model answered a non-finite score, NaN, for document 'd4' (index 3) and label 'short'"),
+                    e.getMessage());
+        }
+    }
+}
