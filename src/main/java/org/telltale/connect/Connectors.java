@@ -1,10 +1,12 @@
 package org.telltale.connect;
 
 import java.net.URI;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.telltale.UsageException;
+import org.telltale.model.ModelFile;
 import org.telltale.model.TextClassifier;
 
 /**
@@ -38,7 +40,11 @@ public final class Connectors {
     }
 
     private static TextClassifier openFile(ConnectorSettings settings) {
-        throw new UsageException("--model " + settings.spec() + ": model files are not readable yet");
+        if (settings.spec().matches("[A-Za-z][A-Za-z0-9+.-]*://.*")) {
+            throw new UsageException("--model " + Endpoints.safe(settings.spec()) + ": unsupported URL scheme "
+                    + "(expected http:// or https://, exec:COMMAND, or a model file)");
+        }
+        return inProcess(ModelFile.load(Path.of(settings.spec())), settings);
     }
 
     private static TextClassifier openHttp(ConnectorSettings settings) {
