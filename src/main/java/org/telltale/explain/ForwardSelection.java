@@ -1,0 +1,105 @@
+package org.telltale.explain;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Greedy forward selection: at each step add the column that most reduces the residual sum of
+ * squares of a least-squares fit on the columns chosen so far (Miller, Subset Selection in
+ * Regression, 2nd ed., §3.2).
+ *
+ * <p>It never forms the d×d Gram matrix. The chosen columns are kept as an orthonormal basis
+ * q₁…q_k (Gram–Schmidt, re-orthogonalised once, which is enough in floating point — Giraud et al.
+ * 2005, "twice is enough"), and every candidate j carries only its coefficients c_jk = q_kᵀx_j.
+ * The gain of candidate j is then (x_jᵀr)² / ‖x_j − Σ c_jk q_k‖², computable from c_j alone;
+ * adding one term costs one product Xᵀq, O(N·d), so choosing K terms costs O(N·d·K) time and
+ * O(N·K + d·K) memory beyond the design itself.
+ */
+public final class ForwardSelection {
+    /** A candidate whose remaining norm falls below this share of its own norm is collinear. */
+    private static final double COLLINEAR = 1e-10;
+
+    private ForwardSelection() {
+    }
+
+    /**
+     * Chooses up to {@code k} columns of {@code x} to explain {@code y}, in the order chosen. The
+     * design is taken as given: centre and weight it first (see {@link WeightedCentered}).
+     */
+    public static List<Integer> select(Columns x, double[] y, int k) {
+        int n = x.rows();
+        int d = x.columns();
+        int steps = Math.min(k, d);
+        double[] norm2 = new double[d];
+        double[] col = new double[n];
+        for (int j = 0; j < d; j++) {
+            x.column(j, col);
+            norm2[j] = dot(col, col);
+        }
+        double[] xty = new double[d];
+        x.transposeTimes(y, xty);
+
+        List<double[]> basis = new ArrayList<>(steps);
+        double[] qty = new double[steps];
+        double[] explained = new double[d]; // Σ_k c_jk (q_kᵀy)
+        double[] removed = new double[d]; // Σ_k c_jk²
+        boolean[] chosen = new boolean[d];
+        List<Integer> order = new ArrayList<>(steps);
+
+        for (int step = 0; step < steps; step++) {
+            int best = -1;
+            double bestGain = 0;
+            for (int j = 0; j < d; j++) {
+                if (chosen[j] || norm2[j] == 0) {
+                    continue;
+                }
+                double rest = norm2[j] - removed[j];
+                if (rest <= COLLINEAR * norm2[j]) {
+                    continue;
+                }
+                double proj = xty[j] - explained[j];
+                double gain = proj * proj / rest;
+                if (gain > bestGain) {
+                    bestGain = gain;
+                    best = j;
+                }
+            }
+            if (best < 0) {
+                break; // every remaining column is collinear with the chosen ones or constant
+            }
+            x.column(best, col);
+            double[] q = col.clone();
+            for (int pass = 0; pass < 2; pass++) {
+                for (double[] b : basis) {
+                    double c = dot(b, q);
+                    for (int i = 0; i < n; i++) {
+                        q[i] -= c * b[i];
+                    }
+                }
+            }
+            double norm = Math.sqrt(dot(q, q));
+            for (int i = 0; i < n; i++) {
+                q[i] /= norm;
+            }
+            double[] c = new double[d]; // c[j] = qᵀx_j, folded into the running sums below
+            x.transposeTimes(q, c);
+            qty[step] = dot(q, y);
+            for (int j = 0; j < d; j++) {
+                explained[j] += c[j] * qty[step];
+                removed[j] += c[j] * c[j];
+            }
+            basis.add(q);
+            chosen[best] = true;
+            order.add(best);
+        }
+        return order;
+    }
+
+    static double dot(double[] a, double[] b) {
+        double s = 0;
+        for (int i = 0; i < a.length; i++) {
+            s += a[i] * b[i];
+        }
+        return s;
+    }
+}
