@@ -20,6 +20,8 @@ import org.telltale.text.Span;
  * @param timing    where the time went
  * @param text      the original text the spans point into
  * @param gold      the gold label, or {@code null}
+ * @param method    how it was computed and what the run observed (settings, units, calls,
+ *                  stability, notes); {@code null} when unknown, e.g. read from a minimal file
  */
 public record Explanation(
         String id,
@@ -32,10 +34,45 @@ public record Explanation(
         List<TermWeight> terms,
         Timing timing,
         String text,
-        String gold) {
+        String gold,
+        Method method) {
 
     public Explanation {
         terms = List.copyOf(terms);
+    }
+
+    /** An explanation without method details. */
+    public Explanation(String id, String label, double score, String predicted, Map<String, Double> scores,
+            int probes, Fit fit, List<TermWeight> terms, Timing timing, String text, String gold) {
+        this(id, label, score, predicted, scores, probes, fit, terms, timing, text, gold, null);
+    }
+
+    /**
+     * How an explanation was computed and what the run observed.
+     *
+     * @param unit       {@code word}, {@code occurrence} or {@code line}
+     * @param weighting  {@code cosine} or {@code shapley}
+     * @param selection  the selection asked for ({@code auto}, {@code forward}, …)
+     * @param bandwidth  σ of the cosine kernel
+     * @param ridge      λ of the ridge penalty in sampled cosine fits
+     * @param words      K asked for
+     * @param seed       the run seed
+     * @param analyzer   the analyzer name
+     * @param filler     the text written in place of removed spans
+     * @param level      the interval coverage, e.g. 0.95
+     * @param units      d, the number of units of the document (after any cap)
+     * @param calls      distinct texts sent to the model (probes minus repeats)
+     * @param exact      true when every subset of units was enumerated
+     * @param stability  split-half agreement of the top terms and signs, NaN when not measured
+     * @param resamples  bootstrap resamples behind the intervals (0 when exact)
+     * @param notes      plain-language remarks on this explanation (caps, degenerate fits, …)
+     */
+    public record Method(String unit, String weighting, String selection, double bandwidth, double ridge,
+            int words, long seed, String analyzer, String filler, double level, int units, int calls,
+            boolean exact, double stability, int resamples, List<String> notes) {
+        public Method {
+            notes = List.copyOf(notes);
+        }
     }
 
     /** The surrogate's intercept, weighted R² on the probes, and prediction at the original. */

@@ -1,0 +1,166 @@
+package org.telltale.explain;
+
+import java.util.Objects;
+import org.telltale.UsageException;
+import org.telltale.text.UnitKind;
+
+/**
+ * How explanations are computed. Build from {@link #defaults()} and the {@code with…} methods;
+ * every value is checked when the record is made.
+ *
+ * @param words      K, the number of units reported (before any {@code none} selection)
+ * @param probes     the probe budget including probe 0, or {@link #AUTO} to grow it in rounds
+ *                   until the top-K terms are stable
+ * @param probeCap   the most probes {@link #AUTO} may spend
+ * @param unit       what one feature stands for
+ * @param select     how the K units are chosen
+ * @param bandwidth  σ of the cosine kernel
+ * @param weighting  cosine kernel or Shapley kernel
+ * @param analyzer   the analyzer name for {@code Analyzers.byName}
+ * @param seed       the run seed; each document's stream derives from it and the document id
+ * @param filler     written in place of each removed span ("" cuts cleanly)
+ * @param ridge      λ of the ridge penalty on the slopes of a sampled fit (exact fits use none)
+ * @param bootstrap  bootstrap resamples for the weight intervals (0 for none)
+ * @param level      the coverage of the weight intervals, e.g. 0.95
+ * @param stabilityTarget the split-half agreement at which {@link #AUTO} stops
+ */
+public record ExplainSettings(
+        int words,
+        int probes,
+        int probeCap,
+        UnitKind unit,
+        Selection select,
+        double bandwidth,
+        Weighting weighting,
+        String analyzer,
+        long seed,
+        String filler,
+        double ridge,
+        int bootstrap,
+        double level,
+        double stabilityTarget) {
+
+    /** The {@link #probes} value that asks for the adaptive budget. */
+    public static final int AUTO = 0;
+    /** The fixed budget used unless asked otherwise. */
+    public static final int DEFAULT_PROBES = 2000;
+    /** σ = 0.25: see docs/method.md, "Kernels", for why. */
+    public static final double DEFAULT_BANDWIDTH = 0.25;
+
+    public ExplainSettings {
+        Objects.requireNonNull(unit, "unit");
+        Objects.requireNonNull(select, "select");
+        Objects.requireNonNull(weighting, "weighting");
+        Objects.requireNonNull(analyzer, "analyzer");
+        filler = filler == null ? "" : filler;
+        if (words < 1) {
+            throw new UsageException("--words must be at least 1: " + words);
+        }
+        if (probes != AUTO && probes < 2) {
+            throw new UsageException("--probes must be auto or at least 2: " + probes);
+        }
+        if (probeCap < 2) {
+            throw new UsageException("the probe cap must be at least 2: " + probeCap);
+        }
+        if (!(bandwidth > 0) || Double.isInfinite(bandwidth)) {
+            throw new UsageException("--bandwidth must be a positive number: " + bandwidth);
+        }
+        if (!(ridge >= 0) || Double.isInfinite(ridge)) {
+            throw new UsageException("the ridge penalty must be zero or positive: " + ridge);
+        }
+        if (bootstrap < 0) {
+            throw new UsageException("bootstrap resamples must be zero or positive: " + bootstrap);
+        }
+        if (!(level > 0 && level < 1)) {
+            throw new UsageException("the interval level must lie strictly between 0 and 1: " + level);
+        }
+        if (!(stabilityTarget > 0 && stabilityTarget <= 1)) {
+            throw new UsageException("the stability target must lie in (0, 1]: " + stabilityTarget);
+        }
+    }
+
+    /** Ten words, 2,000 probes, word units, automatic selection, σ = 0.25, cosine kernel, seed 1. */
+    public static ExplainSettings defaults() {
+        return new ExplainSettings(10, DEFAULT_PROBES, 4000, UnitKind.WORD, Selection.AUTO, DEFAULT_BANDWIDTH,
+                Weighting.COSINE, "standard", 1L, "", 1.0, 200, 0.95, 0.9);
+    }
+
+    public boolean adaptive() {
+        return probes == AUTO;
+    }
+
+    /** The most probes this explanation may spend. */
+    public int budget() {
+        return adaptive() ? probeCap : probes;
+    }
+
+    public ExplainSettings withWords(int v) {
+        return new ExplainSettings(v, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
+                ridge, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withProbes(int v) {
+        return new ExplainSettings(words, v, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
+                ridge, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withProbeCap(int v) {
+        return new ExplainSettings(words, probes, v, unit, select, bandwidth, weighting, analyzer, seed, filler,
+                ridge, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withUnit(UnitKind v) {
+        return new ExplainSettings(words, probes, probeCap, v, select, bandwidth, weighting, analyzer, seed, filler,
+                ridge, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withSelect(Selection v) {
+        return new ExplainSettings(words, probes, probeCap, unit, v, bandwidth, weighting, analyzer, seed, filler,
+                ridge, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withBandwidth(double v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, v, weighting, analyzer, seed, filler,
+                ridge, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withWeighting(Weighting v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, v, analyzer, seed, filler,
+                ridge, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withAnalyzer(String v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, v, seed, filler,
+                ridge, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withSeed(long v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, v, filler,
+                ridge, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withFiller(String v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, v,
+                ridge, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withRidge(double v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
+                v, bootstrap, level, stabilityTarget);
+    }
+
+    public ExplainSettings withBootstrap(int v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
+                ridge, v, level, stabilityTarget);
+    }
+
+    public ExplainSettings withLevel(double v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
+                ridge, bootstrap, v, stabilityTarget);
+    }
+
+    public ExplainSettings withStabilityTarget(double v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
+                ridge, bootstrap, level, v);
+    }
+}

@@ -1,0 +1,228 @@
+package org.telltale.explain;
+
+import java.util.ArrayList;
+import java.util.BitSet;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import org.apache.lucene.analysis.Analyzer;
+import org.telltale.TelltaleException;
+import org.telltale.model.TextClassifier;
+import org.telltale.text.Analyzers;
+import org.telltale.text.Document;
+import org.telltale.text.Masker;
+import org.telltale.text.TermIndex;
+import org.telltale.text.Unit;
+
+/**
+ * Explains single predictions of a black-box classifier with a local weighted linear surrogate:
+ * cut the document into units, send probes with random units removed, weight them by a kernel,
+ * select K units and refit (see docs/method.md).
+ *
+ * <p>Thread-safe: one explainer may explain many documents at once. Each document draws from its
+ * own random stream, derived from the run seed and its id, so the result does not depend on the
+ * order or the thread that explains it.
+ */
+public final class Explainer {
+    /** The first round of an adaptive budget, probe 0 included. */
+    static final int FIRST_ROUND = 250;
+    /** Enumeration is limited to 2^MAX_EXACT_UNITS subsets whatever the budget. */
+    static final int MAX_EXACT_UNITS = 20;
+
+    private final TextClassifier classifier;
+    private final ExplainSettings settings;
+    private final Analyzer analyzer;
+    private final Masker masker;
+    private final SurrogateFit fitter;
+
+    public Explainer(TextClassifier classifier, ExplainSettings settings) {
+        this.classifier = Objects.requireNonNull(classifier, "classifier");
+        this.settings = Objects.requireNonNull(settings, "settings");
+        this.analyzer = Analyzers.byName(settings.analyzer());
+        this.masker = new Masker(settings.filler());
+        this.fitter = new SurrogateFit(settings);
+    }
+
+    public ExplainSettings settings() {
+        return settings;
+    }
+
+    /**
+     * Explains {@code doc} for {@code labelOrNull}, or for the label the model predicts when null.
+     *
+     * @throws TelltaleException when the model has no such label
+     */
+    public Explanation explain(Document doc, String labelOrNull) {
+        long start = System.nanoTime();
+        TermIndex index = TermIndex.of(doc.text(), analyzer, settings.unit());
+        int d = index.size();
+        List<String> notes = new ArrayList<>();
+        ProbeRandom random = ProbeRandom.forDocument(settings.seed(), doc.id());
+        ProbeRandom sampling = random.split();
+        ProbeRandom resampling = random.split();
+        ProbeSet probes = new ProbeSet(doc.id(), index, masker, classifier);
+        boolean shapley = settings.weighting() == Weighting.SHAPLEY;
+        boolean exact = d <= MAX_EXACT_UNITS && (1L << d) <= settings.budget();
+
+        List<BitSet> fixed = new ArrayList<>();
+        fixed.add(new BitSet());
+        if (exact) {
+            probes.add(ProbeSampler.enumerate(d));
+        } else {
+            if (shapley) {
+                BitSet all = new BitSet(d);
+                all.set(0, d);
+                fixed.add(all);
+            }
+            int first = settings.adaptive() ? Math.min(FIRST_ROUND, settings.probeCap()) : settings.probes();
+            List<BitSet> round = new ArrayList<>(fixed);
+            round.addAll(ProbeSampler.draw(d, Math.max(0, first - fixed.size()), sampling));
+            probes.add(round);
+        }
+        int labelColumn = labelColumn(doc, probes, labelOrNull);
+        String label = probes.labels().get(labelColumn);
+        int draws = Math.max(1, settings.budget() - 1);
+
+        double stability;
+        Surrogate surrogate;
+        if (d == 0) {
+            notes.add("the analyzer found no units in this document; nothing to explain");
+            stability = Double.NaN;
+            surrogate = null;
+        } else if (exact) {
+            notes.add("exact: all " + (1L << d) + " subsets of " + d + " units were enumerated once;"
+                    + " the weights carry no sampling uncertainty");
+            stability = 1.0;
+            surrogate = fitter.fit(d, probes.rows(), probes.column(labelColumn), true, draws, null);
+        } else {
+            stability = stability(d, probes, labelColumn, fixed.size());
+            while (settings.adaptive() && stability < settings.stabilityTarget() && probes.size() < settings.probeCap()) {
+                int next = Math.min(settings.probeCap(), 2 * probes.size());
+                probes.add(ProbeSampler.draw(d, next - probes.size(), sampling));
+                stability = stability(d, probes, labelColumn, fixed.size());
+            }
+            if (settings.adaptive() && stability < settings.stabilityTarget()) {
+                notes.add(String.format(java.util.Locale.ROOT,
+                        "the probe cap of %d was reached before the top terms were stable (split-half agreement %.2f, target %.2f)",
+                        settings.probeCap(), stability, settings.stabilityTarget()));
+            }
+            surrogate = fitter.fit(d, probes.rows(), probes.column(labelColumn), false, draws, resampling);
+        }
+
+        double[] original = probes.scores(0);
+        Map<String, Double> scores = new LinkedHashMap<>();
+        for (int j = 0; j < original.length; j++) {
+            scores.put(probes.labels().get(j), original[j]);
+        }
+        List<Explanation.TermWeight> terms = new ArrayList<>();
+        Explanation.Fit fit;
+        int resamples = 0;
+        if (surrogate == null) {
+            fit = new Explanation.Fit(original[labelColumn], 1.0, original[labelColumn]);
+        } else {
+            fit = new Explanation.Fit(surrogate.intercept(), surrogate.r2(), surrogate.prediction());
+            resamples = surrogate.resamples();
+            List<Unit> units = index.units();
+            for (int i = 0; i < surrogate.units().length; i++) {
+                Unit unit = units.get(surrogate.units()[i]);
+                terms.add(new Explanation.TermWeight(unit.term(), surrogate.weights()[i], surrogate.low()[i],
+                        surrogate.high()[i], unit.spans()));
+            }
+            terms.sort(Comparator.comparingDouble((Explanation.TermWeight t) -> -Math.abs(t.weight()))
+                    .thenComparing(t -> t.spans().isEmpty() ? 0 : t.spans().get(0).start()));
+        }
+        Explanation.Method method = new Explanation.Method(settings.unit().key(), settings.weighting().key(),
+                settings.select().key(), settings.bandwidth(), settings.ridge(), settings.words(), settings.seed(),
+                settings.analyzer(), settings.filler(), settings.level(), d, probes.calls(), exact, stability,
+                resamples, notes);
+        long total = (System.nanoTime() - start) / 1_000_000;
+        return new Explanation(doc.id(), label, original[labelColumn], predicted(original, probes.labels()),
+                scores, probes.size(), fit, terms, new Explanation.Timing(probes.modelMillis(), total), doc.text(),
+                doc.label(), method);
+    }
+
+    private static int labelColumn(Document doc, ProbeSet probes, String labelOrNull) {
+        List<String> labels = probes.labels();
+        if (labelOrNull == null) {
+            return labels.indexOf(predicted(probes.scores(0), labels));
+        }
+        int column = labels.indexOf(labelOrNull);
+        if (column < 0) {
+            throw new TelltaleException("document " + doc.id() + ": the model has no label '" + labelOrNull
+                    + "' (its labels: " + String.join(", ", labels) + ")");
+        }
+        return column;
+    }
+
+    private static String predicted(double[] row, List<String> labels) {
+        int best = 0;
+        for (int j = 1; j < row.length; j++) {
+            if (row[j] > row[best]) {
+                best = j;
+            }
+        }
+        return labels.get(best);
+    }
+
+    /**
+     * Split-half agreement: the drawn probes are dealt alternately into two halves (the fixed
+     * probes go to both), a surrogate is fitted on each, and the result is the share of the top
+     * K terms (by absolute weight) that both halves select with the same sign.
+     */
+    private double stability(int d, ProbeSet probes, int labelColumn, int fixedCount) {
+        List<BitSet> rows = probes.rows();
+        double[] y = probes.column(labelColumn);
+        List<BitSet> a = new ArrayList<>();
+        List<BitSet> b = new ArrayList<>();
+        List<Double> ya = new ArrayList<>();
+        List<Double> yb = new ArrayList<>();
+        for (int i = 0; i < rows.size(); i++) {
+            boolean toA = i < fixedCount || (i - fixedCount) % 2 == 0;
+            boolean toB = i < fixedCount || (i - fixedCount) % 2 == 1;
+            if (toA) {
+                a.add(rows.get(i));
+                ya.add(y[i]);
+            }
+            if (toB) {
+                b.add(rows.get(i));
+                yb.add(y[i]);
+            }
+        }
+        Surrogate sa = fitter.fit(d, a, ya.stream().mapToDouble(Double::doubleValue).toArray(), false, 1, null);
+        Surrogate sb = fitter.fit(d, b, yb.stream().mapToDouble(Double::doubleValue).toArray(), false, 1, null);
+        return agreement(sa, sb, settings.words());
+    }
+
+    /** The share of the top-k units of two surrogates that appear in both with the same sign. */
+    static double agreement(Surrogate a, Surrogate b, int k) {
+        Map<Integer, Double> topA = top(a, k);
+        Map<Integer, Double> topB = top(b, k);
+        int size = Math.max(topA.size(), topB.size());
+        if (size == 0) {
+            return 1.0;
+        }
+        int agree = 0;
+        for (Map.Entry<Integer, Double> e : topA.entrySet()) {
+            Double other = topB.get(e.getKey());
+            if (other != null && Math.signum(other) == Math.signum(e.getValue())) {
+                agree++;
+            }
+        }
+        return (double) agree / size;
+    }
+
+    private static Map<Integer, Double> top(Surrogate s, int k) {
+        List<Integer> order = new ArrayList<>();
+        for (int i = 0; i < s.units().length; i++) {
+            order.add(i);
+        }
+        order.sort(Comparator.<Integer>comparingDouble(i -> -Math.abs(s.weights()[i])).thenComparingInt(i -> s.units()[i]));
+        Map<Integer, Double> out = new LinkedHashMap<>();
+        for (int i : order.subList(0, Math.min(k, order.size()))) {
+            out.put(s.units()[i], s.weights()[i]);
+        }
+        return out;
+    }
+}
