@@ -1,0 +1,80 @@
+package org.telltale.report.json;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.ByteArrayInputStream;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.telltale.TelltaleException;
+import org.telltale.explain.Explanation;
+import org.telltale.text.Span;
+
+class ExplanationsJsonTest {
+    static Explanation sample() {
+        Map<String, Double> scores = new LinkedHashMap<>();
+        scores.put("billing", 0.81);
+        scores.put("shipping", 0.19);
+        return new Explanation("T-1", "billing", 0.81, "billing", scores, 2000,
+                new Explanation.Fit(0.42, 0.93, 0.8), List.of(
+                        new Explanation.TermWeight("invoice", 0.21, 0.18, 0.24, List.of(new Span(4, 11), new Span(30, 37))),
+                        new Explanation.TermWeight("parcel", -0.05, -0.07, -0.03, List.of(new Span(12, 18)))),
+                new Explanation.Timing(120, 180), "Our invoice parcel \"late\" é… invoice", "billing",
+                new Explanation.Method("word", "cosine", "auto", 0.25, 1.0, 10, 1L, "standard", "", 0.95, 5, 1480,
+                        false, Double.NaN, 200, List.of("a note")));
+    }
+
+    @Test
+    void writesTheContractFieldNames() throws IOException {
+        // The telltale.explanations v1 contract (issue text): these names must not change.
+        JsonNode root = new ObjectMapper().readTree(ExplanationsJson.toJson(List.of(sample())));
+        assertEquals("telltale.explanations", root.get("format").asText());
+        assertEquals(1, root.get("version").asInt());
+        JsonNode e = root.get("explanations").get(0);
+        for (String f : List.of("id", "label", "score", "probes", "fit", "terms", "timing")) {
+            assertTrue(e.has(f), f);
+        }
+        assertEquals(0.93, e.get("fit").get("r2").asDouble());
+        assertEquals(0.8, e.get("fit").get("prediction").asDouble());
+        JsonNode t = e.get("terms").get(0);
+        assertEquals("invoice", t.get("term").asText());
+        assertEquals(30, t.get("spans").get(1).get(0).asInt());
+        assertEquals(120, e.get("timing").get("model_ms").asInt());
+        assertTrue(e.get("stability").isNull(), "NaN must be written as null");
+    }
+
+    @Test
+    void readsBackWhatItWrites() throws IOException {
+        String json = ExplanationsJson.toJson(List.of(sample()));
+        List<Explanation> back = ExplanationsJson.read(new ByteArrayInputStream(json.getBytes(StandardCharsets.UTF_8)), "x.json");
+        assertEquals(1, back.size());
+        assertEquals(json, ExplanationsJson.toJson(back));
+        Explanation one = ExplanationsJson.fromLine(ExplanationsJson.toLine(sample()), "line 1");
+        assertEquals(sample().terms(), one.terms());
+        assertEquals(sample().text(), one.text());
+    }
+
+    @Test
+    void readsOneExplanationPerLine() throws IOException {
+        String lines = ExplanationsJson.toLine(sample()) + "\n\n" + ExplanationsJson.toLine(sample()) + "\n";
+        assertEquals(2, ExplanationsJson.read(new ByteArrayInputStream(lines.getBytes(StandardCharsets.UTF_8)), "e.jsonl").size());
+    }
+
+    @Test
+    void rejectsOtherFormatsAndBadSpansNamingThePlace() {
+        String other = "{\"format\":\"telltale.audit\",\"version\":1}";
+        TelltaleException e = assertThrows(TelltaleException.class,
+                () -> ExplanationsJson.read(new ByteArrayInputStream(other.getBytes(StandardCharsets.UTF_8)), "a.json"));
+        assertTrue(e.getMessage().startsWith("a.json: format"), e.getMessage());
+        String bad = ExplanationsJson.toLine(sample()).replace("[4,11]", "[11,4]");
+        TelltaleException e2 = assertThrows(TelltaleException.class, () -> ExplanationsJson.fromLine(bad, "e.jsonl:3"));
+        assertTrue(e2.getMessage().contains("e.jsonl:3") && e2.getMessage().contains("T-1"), e2.getMessage());
+    }
+}
