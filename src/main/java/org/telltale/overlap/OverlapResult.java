@@ -12,17 +12,15 @@ import java.util.Map;
  * @param pairs      all pairs, train–test first, then within train, then within test; each group by
  *                   falling similarity, then ids
  * @param summary    the counts
- * @param seenTest   positions (0-based, in reading order) of test documents with a train duplicate, sorted
  * @param trainTexts texts of train documents in pairs by id (empty unless {@code keepTexts})
  * @param testTexts  texts of test documents in pairs by id (empty unless {@code keepTexts})
  * @param inflation  accuracy with and without the seen test documents, or {@code null} without a model
  */
 public record OverlapResult(String trainName, String testName, OverlapSettings settings, List<OverlapPair> pairs,
-                            OverlapSummary summary, int[] seenTest, Map<String, String> trainTexts,
+                            OverlapSummary summary, Map<String, String> trainTexts,
                             Map<String, String> testTexts, Inflation inflation) {
     public OverlapResult {
         pairs = List.copyOf(pairs);
-        seenTest = seenTest.clone();
         trainTexts = Map.copyOf(trainTexts);
         testTexts = Map.copyOf(testTexts);
     }
@@ -32,8 +30,19 @@ public record OverlapResult(String trainName, String testName, OverlapSettings s
         return pairs.stream().filter(p -> p.kind() == kind).toList();
     }
 
+    /** Ids of the test documents that have a train duplicate. */
+    public java.util.Set<String> seenTestIds() {
+        java.util.Set<String> ids = new java.util.HashSet<>();
+        for (OverlapPair pair : pairs) {
+            if (pair.kind() == PairKind.TRAIN_TEST) {
+                ids.add(pair.second());
+            }
+        }
+        return ids;
+    }
+
     /** This result with the accuracy figures of a model added. */
     public OverlapResult withInflation(Inflation figures) {
-        return new OverlapResult(trainName, testName, settings, pairs, summary, seenTest, trainTexts, testTexts, figures);
+        return new OverlapResult(trainName, testName, settings, pairs, summary, trainTexts, testTexts, figures);
     }
 }

@@ -111,7 +111,7 @@ final class PairAssembler {
                 byKind[PairKind.TRAIN_TEST.ordinal()], exactCross, byKind[PairKind.WITHIN_TRAIN.ordinal()],
                 byKind[PairKind.WITHIN_TEST.ordinal()], seen.cardinality(), seenExact.cardinality(),
                 conflicting.cardinality(), trainSeen.cardinality(), candidates);
-        return new OverlapResult(trainName, testName, settings, pairs, summary, seen.stream().toArray(),
+        return new OverlapResult(trainName, testName, settings, pairs, summary,
                 trainTexts, testTexts, null);
     }
 

@@ -55,7 +55,8 @@ final class VerificationPass {
             source.forEach((Document doc) -> {
                 int at = position[0]++;
                 if (at >= end || !doc.id().equals(table.ids[at])) {
-                    throw changed(source, at - (source == train ? 0 : table.trainCount), doc.id());
+                    throw changed(source, at - (source == train ? 0 : table.trainCount), doc,
+                            at < end ? table.ids[at] : null);
                 }
                 if (needed.get(at)) {
                     runner.add(new Item(at, doc.text()));
@@ -74,9 +75,10 @@ final class VerificationPass {
         return verify(candidates, shingles, texts);
     }
 
-    private static TelltaleException changed(DocumentSource source, int index, String id) {
+    private static TelltaleException changed(DocumentSource source, int index, Document doc, String before) {
         return new TelltaleException(source.name() + " changed while it was read: document " + (index + 1)
-                + " (id " + id + ") is not the one read before");
+                + " is now " + doc.describe() + (before == null ? ", past the end of the first reading"
+                : ", where it was '" + before + "' before") + "; overlap reads each corpus twice");
     }
 
     private Verified verify(long[] candidates, long[][] shingles, String[] texts) {

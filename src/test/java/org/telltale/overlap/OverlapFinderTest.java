@@ -157,7 +157,7 @@ class OverlapFinderTest {
         assertEquals(2, summary.exactTrainTestPairs());
         assertEquals(1, summary.withinTrainPairs());
         assertEquals(1, summary.withinTestPairs());
-        assertEquals(0, result.seenTest()[0]);
+        assertEquals(java.util.Set.of("s1"), result.seenTestIds());
     }
 
     @Test
