@@ -1,13 +1,15 @@
 package org.telltale.text;
 
-import java.util.ArrayList;
 import java.util.BitSet;
-import java.util.List;
 
 /**
  * Rebuilds a document without some of its units by cutting their spans out of the original
  * string, optionally writing a filler in each cut's place. Every character outside the cut spans
  * stays exactly as it was.
+ *
+ * <p>One pass over the index's spans, sorted once when the index was built, and one pass over
+ * the text: O(text length + spans) per probe, with the result string as the only allocation
+ * beyond one builder.
  *
  * <p>Immutable and thread-safe.
  */
@@ -32,26 +34,35 @@ public final class Masker {
         if (removed.isEmpty()) {
             return index.text();
         }
-        List<Span> cuts = new ArrayList<>();
-        for (int u = removed.nextSetBit(0); u >= 0; u = removed.nextSetBit(u + 1)) {
-            cuts.addAll(index.units().get(u).spans());
-        }
-        cuts.sort(null);
         String text = index.text();
         StringBuilder out = new StringBuilder(text.length());
         int cursor = 0;
-        for (Span cut : cuts) {
-            if (cut.end() <= cursor) {
-                continue; // wholly inside a cut already made
+        for (int i = 0, n = index.spanCount(); i < n; i++) {
+            if (removed.get(index.spanUnit(i))) {
+                out.append(text, cursor, index.spanStart(i)).append(filler);
+                cursor = index.spanEnd(i);
             }
-            int start = Math.max(cut.start(), cursor);
-            out.append(text, cursor, start);
-            if (start == cut.start()) {
-                out.append(filler);
-            }
-            cursor = cut.end();
         }
-        out.append(text, cursor, text.length());
-        return out.toString();
+        return out.append(text, cursor, text.length()).toString();
+    }
+
+    /** The text of {@code index} keeping only the units marked present ({@code present.length == index.size()}). */
+    public String mask(TermIndex index, boolean[] present) {
+        if (present.length != index.size()) {
+            throw new IllegalArgumentException("presence vector has " + present.length + " entries for " + index.size() + " units");
+        }
+        String text = index.text();
+        StringBuilder out = null;
+        int cursor = 0;
+        for (int i = 0, n = index.spanCount(); i < n; i++) {
+            if (!present[index.spanUnit(i)]) {
+                if (out == null) {
+                    out = new StringBuilder(text.length());
+                }
+                out.append(text, cursor, index.spanStart(i)).append(filler);
+                cursor = index.spanEnd(i);
+            }
+        }
+        return out == null ? text : out.append(text, cursor, text.length()).toString();
     }
 }

@@ -3,8 +3,12 @@ package org.telltale.text;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.analysis.TokenStream;
@@ -16,26 +20,90 @@ import org.apache.lucene.analysis.tokenattributes.OffsetAttribute;
  * text. Units are numbered in order of first appearance; that number is the feature index the
  * explainer uses.
  *
+ * <p>Spans never overlap, across all units of one index: when a filter emits several tokens
+ * over the same text (synonyms, n-grams, word parts kept beside the whole word), the first token
+ * to claim the text keeps it and the later overlapping tokens are folded into it (counted in
+ * {@link #note()}). So cutting a unit's spans never cuts into another unit's.
+ *
+ * <p>The number of units can be capped ({@link #of(String, Analyzer, UnitKind, int)},
+ * {@link #limit(int)}): a 1 MB e-mail thread may hold 50,000 distinct terms, and an explanation
+ * over all of them costs memory and probes for little. Word units keep the most frequent terms
+ * (ties: the earlier first); occurrence and line units keep the first ones. Units left out are
+ * never masked, so they stay in every probe; {@link #note()} says how many.
+ *
  * <p>Immutable and thread-safe once built.
  */
 public final class TermIndex {
     private final String text;
     private final UnitKind kind;
     private final List<Unit> units;
+    private final int totalUnits;
+    private final int foldedTokens;
+    /** All spans of all units, sorted by start: the masker walks these with one cursor. */
+    private final int[] spanStarts;
+    private final int[] spanEnds;
+    private final int[] spanUnits;
+    private Map<String, Integer> byTerm;
 
-    private TermIndex(String text, UnitKind kind, List<Unit> units) {
+    private TermIndex(String text, UnitKind kind, List<Unit> units, int totalUnits, int foldedTokens) {
         this.text = text;
         this.kind = kind;
         this.units = List.copyOf(units);
+        this.totalUnits = totalUnits;
+        this.foldedTokens = foldedTokens;
+        int spans = 0;
+        for (Unit unit : this.units) {
+            spans += unit.spans().size();
+        }
+        long[] order = new long[spans];
+        int at = 0;
+        for (int u = 0; u < this.units.size(); u++) {
+            for (Span span : this.units.get(u).spans()) {
+                order[at++] = ((long) span.start() << 32) | u; // sorts by start; starts are distinct
+            }
+        }
+        Arrays.sort(order);
+        spanStarts = new int[spans];
+        spanEnds = new int[spans];
+        spanUnits = new int[spans];
+        int[] next = new int[this.units.size()];
+        for (int i = 0; i < spans; i++) {
+            int u = (int) order[i];
+            Span span = this.units.get(u).spans().get(next[u]++);
+            spanStarts[i] = span.start();
+            spanEnds[i] = span.end();
+            spanUnits[i] = u;
+        }
     }
 
     /** Cuts {@code text} into units of {@code kind}; {@code analyzer} is unused for lines. */
     public static TermIndex of(String text, Analyzer analyzer, UnitKind kind) {
-        return switch (kind) {
-            case WORD -> new TermIndex(text, kind, words(text, analyzer));
-            case OCCURRENCE -> new TermIndex(text, kind, occurrences(text, analyzer));
-            case LINE -> new TermIndex(text, kind, lines(text));
+        return of(text, analyzer, kind, Integer.MAX_VALUE);
+    }
+
+    /**
+     * Cuts {@code text} into at most {@code maxUnits} units of {@code kind} (see the class
+     * comment for which are kept).
+     */
+    public static TermIndex of(String text, Analyzer analyzer, UnitKind kind, int maxUnits) {
+        if (maxUnits < 1) {
+            throw new IllegalArgumentException("maxUnits must be at least 1: " + maxUnits);
+        }
+        Tokens tokens = kind == UnitKind.LINE ? null : tokens(text, analyzer);
+        List<Unit> all = switch (kind) {
+            case WORD -> words(tokens);
+            case OCCURRENCE -> occurrences(tokens);
+            case LINE -> lines(text);
         };
+        return new TermIndex(text, kind, keep(all, kind, maxUnits), all.size(), tokens == null ? 0 : tokens.folded);
+    }
+
+    /** This index with at most {@code maxUnits} units; itself when it already has no more. */
+    public TermIndex limit(int maxUnits) {
+        if (maxUnits < 1) {
+            throw new IllegalArgumentException("maxUnits must be at least 1: " + maxUnits);
+        }
+        return units.size() <= maxUnits ? this : new TermIndex(text, kind, keep(units, kind, maxUnits), totalUnits, foldedTokens);
     }
 
     public String text() {
@@ -55,17 +123,100 @@ public final class TermIndex {
         return units.size();
     }
 
-    private static List<Unit> words(String text, Analyzer analyzer) {
+    /** The number of units the text has before any cap. */
+    public int totalUnits() {
+        return totalUnits;
+    }
+
+    /** Units left out by the cap; they are never masked. */
+    public int leftOut() {
+        return totalUnits - units.size();
+    }
+
+    /** The number of the unit whose term is {@code term}, or -1; for lines, the first such line. */
+    public int indexOf(String term) {
+        Map<String, Integer> map = byTerm;
+        if (map == null) {
+            map = new HashMap<>();
+            for (int u = units.size() - 1; u >= 0; u--) {
+                map.put(units.get(u).term(), u);
+            }
+            byTerm = map;
+        }
+        return map.getOrDefault(term, -1);
+    }
+
+    /**
+     * What an explanation of this index should tell its reader about units it does not cover,
+     * e.g. {@code kept 2000 of 50000 word units (the most frequent); the other 48000 stay in every
+     * probe}; empty when every token is a unit of its own.
+     */
+    public String note() {
+        List<String> parts = new ArrayList<>();
+        if (leftOut() > 0) {
+            parts.add(String.format(Locale.ROOT, "kept %d of %d %s units (%s); the other %d stay in every probe",
+                    units.size(), totalUnits, kind.key(), kind == UnitKind.WORD ? "the most frequent" : "the first", leftOut()));
+        }
+        if (foldedTokens > 0) {
+            parts.add(foldedTokens + " overlapping " + (foldedTokens == 1 ? "token was" : "tokens were") + " folded into earlier ones");
+        }
+        return String.join("; ", parts);
+    }
+
+    /** The number of spans over all units. */
+    public int spanCount() {
+        return spanStarts.length;
+    }
+
+    int spanStart(int i) {
+        return spanStarts[i];
+    }
+
+    int spanEnd(int i) {
+        return spanEnds[i];
+    }
+
+    int spanUnit(int i) {
+        return spanUnits[i];
+    }
+
+    private static List<Unit> keep(List<Unit> all, UnitKind kind, int maxUnits) {
+        if (all.size() <= maxUnits) {
+            return all;
+        }
+        if (kind != UnitKind.WORD) {
+            return all.subList(0, maxUnits);
+        }
+        Integer[] order = new Integer[all.size()];
+        for (int i = 0; i < order.length; i++) {
+            order[i] = i;
+        }
+        // Most spans first; a stable sort keeps earlier units first among equals.
+        Arrays.sort(order, (a, b) -> Integer.compare(all.get(b).spans().size(), all.get(a).spans().size()));
+        Integer[] kept = Arrays.copyOf(order, maxUnits);
+        Arrays.sort(kept);
+        List<Unit> out = new ArrayList<>(maxUnits);
+        for (Integer u : kept) {
+            out.add(all.get(u));
+        }
+        return out;
+    }
+
+    private static List<Unit> words(Tokens tokens) {
         Map<String, List<Span>> byTerm = new LinkedHashMap<>();
-        forEachToken(text, analyzer, (term, span) -> byTerm.computeIfAbsent(term, t -> new ArrayList<>()).add(span));
+        for (int i = 0; i < tokens.terms.size(); i++) {
+            byTerm.computeIfAbsent(tokens.terms.get(i), t -> new ArrayList<>()).add(tokens.spans.get(i));
+        }
         List<Unit> units = new ArrayList<>(byTerm.size());
         byTerm.forEach((term, spans) -> units.add(new Unit(term, spans)));
         return units;
     }
 
-    private static List<Unit> occurrences(String text, Analyzer analyzer) {
-        List<Unit> units = new ArrayList<>();
-        forEachToken(text, analyzer, (term, span) -> units.add(new Unit(term, List.of(span))));
+    private static List<Unit> occurrences(Tokens tokens) {
+        List<Unit> units = new ArrayList<>(tokens.terms.size());
+        for (int i = 0; i < tokens.terms.size(); i++) {
+            units.add(new Unit(tokens.terms.get(i), Collections.singletonList(tokens.spans.get(i))));
+        }
         return units;
     }
 
@@ -91,10 +242,33 @@ public final class TermIndex {
         return units;
     }
 
+    /** The tokens of a text in order, none overlapping another. */
+    private static final class Tokens {
+        final List<String> terms = new ArrayList<>();
+        final List<Span> spans = new ArrayList<>();
+        int folded;
+    }
+
+    private static Tokens tokens(String text, Analyzer analyzer) {
+        Tokens tokens = new Tokens();
+        int[] claimedUpTo = {0};
+        forEachToken(text, analyzer, (term, span) -> {
+            if (span.start() < claimedUpTo[0]) {
+                tokens.folded++;
+                return;
+            }
+            tokens.terms.add(term);
+            tokens.spans.add(span);
+            claimedUpTo[0] = span.end();
+        });
+        return tokens;
+    }
+
     interface TokenSink {
         void accept(String term, Span span);
     }
 
+    /** Every token with a non-empty span inside the text, as the analyzer emits them. */
     static void forEachToken(String text, Analyzer analyzer, TokenSink sink) {
         try (TokenStream stream = analyzer.tokenStream("text", text)) {
             CharTermAttribute term = stream.addAttribute(CharTermAttribute.class);
@@ -103,7 +277,7 @@ public final class TermIndex {
             while (stream.incrementToken()) {
                 int start = offset.startOffset();
                 int end = offset.endOffset();
-                // Filters such as word-delimiter may report offsets past the text; clamp them.
+                // Filters such as word-delimiter may report offsets past the text; drop those.
                 if (start >= 0 && end <= text.length() && start < end) {
                     sink.accept(term.toString(), new Span(start, end));
                 }

@@ -26,4 +26,27 @@ class MaskerTest {
         removed.set(0);
         assertEquals("\r\n\r\n  Hello\rBye", Masker.cutting().mask(index, removed));
     }
+
+    @Test
+    void thePresenceVectorPathGivesTheSameTextAsTheBitSetPath() {
+        TermIndex index = TermIndex.of("Dear team, the invoice for the team is late.", Analyzers.standard(), UnitKind.WORD);
+        boolean[] present = new boolean[index.size()];
+        java.util.Arrays.fill(present, true);
+        assertEquals(index.text(), new Masker("_").mask(index, present));
+        BitSet removed = new BitSet();
+        for (int u : new int[] {1, 2, 4}) {
+            removed.set(u);
+            present[u] = false;
+        }
+        assertEquals("Dear _, _ invoice _ _ _ is late.", new Masker("_").mask(index, present));
+        assertEquals(new Masker("_").mask(index, removed), new Masker("_").mask(index, present));
+    }
+
+    @Test
+    void surrogatePairsAndCombiningMarksAreCutWhole() {
+        TermIndex index = TermIndex.of("cafe\u0301 \uD83D\uDE00 ok", Analyzers.standard(), UnitKind.OCCURRENCE);
+        BitSet removed = new BitSet();
+        removed.set(0);
+        assertEquals(" \uD83D\uDE00 ok", Masker.cutting().mask(index, removed));
+    }
 }
