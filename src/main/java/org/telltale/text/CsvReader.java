@@ -1,14 +1,10 @@
 package org.telltale.text;
 
 import java.io.BufferedInputStream;
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
 import java.io.UncheckedIOException;
 import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Iterator;
@@ -36,6 +32,7 @@ final class CsvReader extends CorpusReader {
 
     private final String file;
     private final CSVParser parser;
+    private final StrictUtf8Reader decoded;
     private final Iterator<CSVRecord> records;
     private final Integer idColumn;
     private final int textColumn;
@@ -50,15 +47,13 @@ final class CsvReader extends CorpusReader {
         this.file = path.toString();
         this.settings = settings;
         InputStream in = new BufferedInputStream(Files.newInputStream(path), 1 << 16);
+        this.decoded = new StrictUtf8Reader(in, skipByteOrderMark(in));
         try {
-            skipByteOrderMark(in);
-            BufferedReader reader = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8.newDecoder()
-                    .onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT)), 1 << 16);
-            this.parser = CSVParser.parse(reader, FORMAT);
+            this.parser = CSVParser.parse(decoded, FORMAT);
         } catch (CharacterCodingException e) {
             in.close();
-            throw new TelltaleException(file + ":1: invalid UTF-8 in the header (Telltale reads UTF-8 only)");
+            throw new TelltaleException(file + ":1: invalid UTF-8 at byte " + decoded.badByte()
+                    + " of the file, in the header (Telltale reads UTF-8 only)");
         } catch (IOException | IllegalArgumentException | UncheckedIOException e) {
             in.close();
             throw new TelltaleException(file + ":1: cannot read the CSV header: " + e.getMessage(), e);
@@ -77,12 +72,20 @@ final class CsvReader extends CorpusReader {
         this.records = parser.iterator();
     }
 
-    private void skipByteOrderMark(InputStream in) throws IOException {
+    /** Skips a UTF-8 byte-order mark; returns the number of bytes skipped. */
+    private int skipByteOrderMark(InputStream in) throws IOException {
         in.mark(4);
         byte[] head = in.readNBytes(4);
         in.reset();
-        Utf8.refuseOtherEncodings(head, head.length, file);
-        in.skipNBytes(Utf8.bomLength(head, head.length));
+        try {
+            Utf8.refuseOtherEncodings(head, head.length, file);
+        } catch (TelltaleException e) {
+            in.close();
+            throw e;
+        }
+        int bom = Utf8.bomLength(head, head.length);
+        in.skipNBytes(bom);
+        return bom;
     }
 
     @Override
@@ -97,7 +100,11 @@ final class CsvReader extends CorpusReader {
             } catch (UncheckedIOException e) {
                 String where = file + ":" + (lineAfterPrevious + 1);
                 if (e.getCause() instanceof CharacterCodingException) {
-                    throw new TelltaleException(where + ": invalid UTF-8 (Telltale reads UTF-8 only; CSV reading cannot resume after it)");
+                    throw new TelltaleException(where + ": invalid UTF-8 at byte " + decoded.badByte()
+                            + " of the file (Telltale reads UTF-8 only; CSV reading cannot resume after it)");
+                }
+                if (!(e.getCause() instanceof org.apache.commons.csv.CSVException)) {
+                    throw new TelltaleException("cannot read " + file + " near line " + (lineAfterPrevious + 1) + ": " + e.getMessage(), e);
                 }
                 throw new TelltaleException(where + ": broken CSV quoting: " + e.getCause().getMessage()
                         + " (RFC 4180: a quoted field ends with a quote followed by a comma or a line end; quotes inside are doubled)");
