@@ -79,6 +79,11 @@ public record ConnectorSettings(
                 Map.of(), ScoreKind.PROBABILITIES, List.of(), DEFAULT_BACKOFF, DEFAULT_MAX_RESTARTS, System::getenv);
     }
 
+    /** The same options for another model spec. */
+    public ConnectorSettings withSpecOf(String otherSpec) {
+        return new ConnectorSettings(otherSpec, protocol, batch, parallel, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
+    }
+
     public ConnectorSettings withProtocol(Protocol p) {
         return new ConnectorSettings(spec, p, batch, parallel, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
     }
