@@ -16,6 +16,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Properties;
 import org.telltale.TelltaleException;
+import org.telltale.audit.AuditResult;
 import org.telltale.explain.Explanation;
 
 /**
@@ -43,6 +44,20 @@ public final class HtmlReports {
                 : "Telltale explanations of " + explanations.size() + " documents";
         String subtitle = explanations.size() == 1 ? "1 document" : explanations.size() + " documents";
         return render("explanations.jte", Map.of("page", page("Explanations", title, subtitle), "documents", views));
+    }
+
+    /**
+     * The audit report: summary and scrub chart, the findings table and chart, each finding's
+     * evidence in context, the reviewer picks as document views, and every explained document
+     * (built on demand in the page so that thousands of them still open quickly).
+     *
+     * @param explanations the explanations of the audit ({@code explanations.jsonl}); the picks and
+     *                     the evidence are looked up here by document id
+     */
+    public static String audit(AuditResult audit, List<Explanation> explanations) {
+        AuditView view = AuditViews.of(audit, explanations);
+        String subtitle = audit.summary().documents() + " documents · " + audit.summary().explained() + " explained";
+        return render("audit.jte", Map.of("page", page("Audit", "Telltale audit", subtitle), "a", view));
     }
 
     /**

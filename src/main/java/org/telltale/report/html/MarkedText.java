@@ -45,9 +45,29 @@ public final class MarkedText {
                 placed.add(new Placed(span, mark));
             }
         }
+        return cut(text, 0, text.length(), placed);
+    }
+
+    /**
+     * The segments of {@code text[from, to)} with every one of {@code spans} that reaches into it
+     * marked by {@code mark}, clipped to the window: a context view around a term.
+     */
+    static List<Segment> window(String text, int from, int to, List<Span> spans, Mark mark) {
+        List<Placed> placed = new ArrayList<>();
+        for (Span span : spans) {
+            int start = Math.max(from, span.start());
+            int end = Math.min(to, span.end());
+            if (start < end) {
+                placed.add(new Placed(new Span(start, end), mark));
+            }
+        }
+        return cut(text, from, to, placed);
+    }
+
+    private static List<Segment> cut(String text, int from, int to, List<Placed> placed) {
         placed.sort(Comparator.comparing(Placed::span));
         List<Segment> segments = new ArrayList<>(placed.size() * 2 + 1);
-        int at = 0;
+        int at = from;
         for (Placed p : placed) {
             int start = Math.max(p.span().start(), at);
             int end = Math.max(p.span().end(), start);
@@ -57,8 +77,8 @@ public final class MarkedText {
             segments.add(new Segment(VisibleText.chunks(text, start, end), p.mark()));
             at = end;
         }
-        if (at < text.length()) {
-            segments.add(new Segment(VisibleText.chunks(text, at, text.length()), null));
+        if (at < to) {
+            segments.add(new Segment(VisibleText.chunks(text, at, to), null));
         }
         return segments;
     }

@@ -12,5 +12,7 @@ final class RenderSample {
         Path dir = Path.of(args[0]);
         HtmlReports.write(HtmlReports.explanations(List.of(SampleExplanations.billing(), SampleExplanations.outage())),
                 dir.resolve("explanations.html"), true);
+        SampleAudit.Audit audit = SampleAudit.of(args.length > 1 ? Integer.parseInt(args[1]) : 60, 7);
+        HtmlReports.write(HtmlReports.audit(audit.result(), audit.explanations()), dir.resolve("audit.html"), true);
     }
 }
