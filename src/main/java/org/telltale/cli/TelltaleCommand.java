@@ -8,7 +8,8 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Audits text classifiers trained by someone else: explains predictions, finds leaked artefacts.",
-        subcommands = {DemoCommand.class, OverlapCommand.class, TrainCommand.class, ScoreCommand.class, ServeCommand.class})
+        subcommands = {DemoCommand.class, OverlapCommand.class, TrainCommand.class, ScoreCommand.class, ServeCommand.class,
+                ReportCommand.class})
 final class TelltaleCommand implements Runnable {
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;

@@ -8,6 +8,8 @@ import java.util.List;
  *
  * @param anchor   the element id of the view, also the prefix of the ids inside it
  * @param segments the marked text, or {@code null} when the JSON carried no text
+ * @param method   how the explanation was computed, one line, or {@code null} when not recorded
+ * @param notes    the explainer's remarks on this explanation (caps, degenerate fits)
  */
 public record DocumentView(
         String anchor,
@@ -25,7 +27,9 @@ public record DocumentView(
         List<LedgerRow> ledger,
         List<MarkedText.Segment> segments,
         int spanCount,
-        int characters) {
+        int characters,
+        String method,
+        List<String> notes) {
 
     /** Whether the model predicts the explained label. */
     public boolean explainsPrediction() {

@@ -42,7 +42,29 @@ final class DocumentViews {
                 List.copyOf(rows),
                 segments,
                 spanCount,
-                e.text() == null ? 0 : e.text().length());
+                e.text() == null ? 0 : e.text().length(),
+                method(e.method()),
+                e.method() == null ? List.of() : e.method().notes().stream().map(VisibleText::inline).toList());
+    }
+
+    private static String method(Explanation.Method m) {
+        if (m == null) {
+            return null;
+        }
+        StringBuilder line = new StringBuilder();
+        line.append(m.units()).append(' ').append(m.unit()).append(" units · ");
+        line.append("shapley".equals(m.weighting()) ? "Shapley kernel"
+                : "cosine kernel σ " + Numbers.plain(m.bandwidth(), 2));
+        line.append(" · ").append(m.selection()).append(" selection");
+        line.append(" · ").append(m.exact() ? "exact enumeration" : m.calls() + " model calls");
+        if (m.level() > 0 && m.level() < 1) {
+            line.append(" · ").append(Numbers.plain(m.level() * 100, 0)).append("% intervals");
+            line.append(m.resamples() > 0 ? " (bootstrap, " + m.resamples() + " resamples)" : "");
+        }
+        if (Double.isFinite(m.stability())) {
+            line.append(" · stability ").append(Numbers.plain(m.stability(), 2));
+        }
+        return VisibleText.inline(line.toString());
     }
 
     /**
