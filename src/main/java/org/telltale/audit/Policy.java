@@ -1,0 +1,169 @@
+package org.telltale.audit;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import java.util.regex.Pattern;
+import java.util.regex.PatternSyntaxException;
+import org.telltale.TelltaleException;
+
+/**
+ * A reviewer's decisions about terms, read from a JSON file:
+ * <pre>{"format": "telltale.policy", "version": 1, "rules": [
+ *   {"term": "meter", "status": "accepted", "note": "meter talk is the billing queue's real evidence"},
+ *   {"pattern": "ogx\\d*", "status": "artefact", "note": "outage ticket prefix"}]}</pre>
+ * A rule names one {@code term} exactly or a {@code pattern} (a Java regular expression that must
+ * match the whole term). {@code accepted} findings are reported as suppressed, never dropped;
+ * {@code artefact} terms are always findings. The first matching rule wins.
+ *
+ * <p>Immutable.
+ */
+public final class Policy {
+    public static final String FORMAT = "telltale.policy";
+
+    /** What a reviewer decided about a term. */
+    public enum Status {
+        ACCEPTED, ARTEFACT;
+
+        public String key() {
+            return this == ACCEPTED ? "accepted" : "artefact";
+        }
+    }
+
+    /** One rule: exactly one of {@code term} and {@code pattern}, a status and the reviewer's note. */
+    public record Rule(String term, Pattern pattern, Status status, String note) {
+        boolean matches(String candidate) {
+            return term != null ? term.equals(candidate) : pattern.matcher(candidate).matches();
+        }
+    }
+
+    private static final Set<String> TOP_KEYS = Set.of("format", "version", "rules");
+    private static final Set<String> RULE_KEYS = Set.of("term", "pattern", "status", "note");
+    private static final Policy EMPTY = new Policy(List.of());
+
+    private final List<Rule> rules;
+
+    private Policy(List<Rule> rules) {
+        this.rules = List.copyOf(rules);
+    }
+
+    public static Policy empty() {
+        return EMPTY;
+    }
+
+    public List<Rule> rules() {
+        return rules;
+    }
+
+    /** The first rule that matches {@code term}. */
+    public Optional<Rule> match(String term) {
+        return rules.stream().filter(r -> r.matches(term)).findFirst();
+    }
+
+    /** Reads a policy file; every error names the file and the rule. */
+    public static Policy read(Path file) {
+        String json;
+        try {
+            json = Files.readString(file, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            throw new TelltaleException("policy file not found: " + file);
+        } catch (IOException e) {
+            throw new TelltaleException("cannot read policy file " + file + ": " + e.getMessage(), e);
+        }
+        return parse(json, file.toString());
+    }
+
+    /** Parses policy JSON; {@code place} names its origin in errors. */
+    public static Policy parse(String json, String place) {
+        JsonNode root;
+        try {
+            root = new ObjectMapper().readTree(json);
+        } catch (JsonProcessingException e) {
+            throw new TelltaleException(place + ": not valid JSON: " + e.getOriginalMessage()
+                    + " at line " + e.getLocation().getLineNr());
+        }
+        if (root == null || !root.isObject()) {
+            throw new TelltaleException(place + ": a policy must be a JSON object with a \"rules\" array");
+        }
+        rejectUnknown(root, TOP_KEYS, place);
+        if (root.has("format") && !FORMAT.equals(root.get("format").asText())) {
+            throw new TelltaleException(place + ": format is '" + root.get("format").asText() + "', expected '" + FORMAT + "'");
+        }
+        if (root.has("version") && root.get("version").asInt(-1) != 1) {
+            throw new TelltaleException(place + ": policy version " + root.get("version") + " is not supported (expected 1)");
+        }
+        JsonNode array = root.get("rules");
+        if (array == null || !array.isArray()) {
+            throw new TelltaleException(place + ": missing \"rules\" array");
+        }
+        List<Rule> rules = new ArrayList<>();
+        for (int i = 0; i < array.size(); i++) {
+            rules.add(rule(array.get(i), place + ": rules[" + i + "]"));
+        }
+        return new Policy(rules);
+    }
+
+    private static Rule rule(JsonNode node, String at) {
+        if (!node.isObject()) {
+            throw new TelltaleException(at + " must be an object");
+        }
+        rejectUnknown(node, RULE_KEYS, at);
+        String term = text(node, "term", at);
+        String pattern = text(node, "pattern", at);
+        if ((term == null) == (pattern == null)) {
+            throw new TelltaleException(at + " needs exactly one of \"term\" and \"pattern\"");
+        }
+        String statusText = text(node, "status", at);
+        Status status;
+        if ("accepted".equals(statusText)) {
+            status = Status.ACCEPTED;
+        } else if ("artefact".equals(statusText)) {
+            status = Status.ARTEFACT;
+        } else {
+            throw new TelltaleException(at + ": status must be \"accepted\" or \"artefact\", not " + node.get("status"));
+        }
+        String note = text(node, "note", at);
+        if (note == null || note.isBlank()) {
+            throw new TelltaleException(at + ": every rule needs a \"note\" saying why");
+        }
+        Pattern compiled = null;
+        if (pattern != null) {
+            try {
+                compiled = Pattern.compile(pattern);
+            } catch (PatternSyntaxException e) {
+                throw new TelltaleException(at + ": bad pattern '" + pattern + "': " + e.getDescription());
+            }
+        }
+        return new Rule(term, compiled, status, note);
+    }
+
+    private static String text(JsonNode node, String name, String at) {
+        JsonNode v = node.get(name);
+        if (v == null || v.isNull()) {
+            return null;
+        }
+        if (!v.isTextual()) {
+            throw new TelltaleException(at + ": \"" + name + "\" must be a string");
+        }
+        return v.asText();
+    }
+
+    private static void rejectUnknown(JsonNode node, Set<String> known, String at) {
+        for (Iterator<String> it = node.fieldNames(); it.hasNext(); ) {
+            String name = it.next();
+            if (!known.contains(name)) {
+                throw new TelltaleException(at + ": unknown key \"" + name + "\" (expected one of " + known.stream().sorted().toList() + ")");
+            }
+        }
+    }
+}

@@ -1,0 +1,52 @@
+package org.telltale.audit;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.telltale.TelltaleException;
+
+class PolicyTest {
+
+    @Test
+    void firstMatchingRuleWinsAndPatternsMatchWholeTerms(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("policy.json");
+        Files.writeString(file, """
+                {"format": "telltale.policy", "version": 1, "rules": [
+                  {"term": "meter", "status": "accepted", "note": "meter talk is billing evidence"},
+                  {"pattern": "ogx\\\\d*", "status": "artefact", "note": "outage ticket prefix"},
+                  {"pattern": "m.*", "status": "artefact", "note": "never reached for meter"}]}
+                """);
+        Policy policy = Policy.read(file);
+        assertEquals(Policy.Status.ACCEPTED, policy.match("meter").orElseThrow().status());
+        assertEquals("outage ticket prefix", policy.match("ogx4471").orElseThrow().note());
+        assertTrue(policy.match("xogx").isEmpty(), "a pattern must match the whole term");
+        assertEquals(Policy.Status.ARTEFACT, policy.match("mains").orElseThrow().status());
+        assertTrue(Policy.empty().match("meter").isEmpty());
+    }
+
+    @Test
+    void badRulesAreNamedByTheirPlace() {
+        TelltaleException noNote = assertThrows(TelltaleException.class, () -> Policy.parse(
+                "{\"rules\":[{\"term\":\"a\",\"status\":\"accepted\",\"note\":\"ok\"},{\"term\":\"b\",\"status\":\"accepted\"}]}",
+                "p.json"));
+        assertEquals("p.json: rules[1]: every rule needs a \"note\" saying why", noNote.getMessage());
+        TelltaleException both = assertThrows(TelltaleException.class, () -> Policy.parse(
+                "{\"rules\":[{\"term\":\"a\",\"pattern\":\"a\",\"status\":\"artefact\",\"note\":\"x\"}]}", "p.json"));
+        assertTrue(both.getMessage().contains("exactly one"), both.getMessage());
+        TelltaleException status = assertThrows(TelltaleException.class, () -> Policy.parse(
+                "{\"rules\":[{\"term\":\"a\",\"status\":\"fine\",\"note\":\"x\"}]}", "p.json"));
+        assertTrue(status.getMessage().contains("\"fine\""), status.getMessage());
+        TelltaleException unknown = assertThrows(TelltaleException.class, () -> Policy.parse(
+                "{\"rules\":[{\"term\":\"a\",\"status\":\"artefact\",\"note\":\"x\",\"colour\":\"red\"}]}", "p.json"));
+        assertTrue(unknown.getMessage().contains("colour"), unknown.getMessage());
+        TelltaleException regex = assertThrows(TelltaleException.class, () -> Policy.parse(
+                "{\"rules\":[{\"pattern\":\"(\",\"status\":\"artefact\",\"note\":\"x\"}]}", "p.json"));
+        assertTrue(regex.getMessage().startsWith("p.json: rules[0]: bad pattern"), regex.getMessage());
+        assertThrows(TelltaleException.class, () -> Policy.read(Path.of("no-such-policy.json")));
+    }
+}
