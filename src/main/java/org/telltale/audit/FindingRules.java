@@ -1,0 +1,102 @@
+package org.telltale.audit;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.telltale.audit.AuditResult.Finding;
+
+/**
+ * Decides which (term, label) pairs are findings: the explanations weigh the term towards the
+ * label (mean weight above zero) with an importance of at least {@value #IMPORTANCE_SHARE} of the
+ * label's most important term; the corpus associates the term with the label beyond the
+ * Bonferroni-corrected threshold; and its occurrences sit mostly outside content — or the policy
+ * marks it {@code artefact}. Severity and confirmation come later, from the scrub test.
+ */
+final class FindingRules {
+    /** A term must reach this share of its label's top importance to count as important. */
+    static final double IMPORTANCE_SHARE = 0.1;
+    /** Fewer documents than this give no usable normal approximation; such pairs are not tested. */
+    static final int MIN_SUPPORT = 5;
+
+    /** A finding before the scrub test has confirmed it or not. */
+    record Candidate(TermWeights.Entry entry, ArtefactKind kind, long support, double z, double pmi,
+            double pLabelGivenTerm, Map<String, Long> df, Map<String, Double> kindShares,
+            boolean significant, Optional<Policy.Rule> rule) {
+
+        String term() {
+            return entry.term();
+        }
+
+        String label() {
+            return entry.label();
+        }
+
+        Finding finish(int flips, double drop) {
+            boolean confirmed = SeverityRules.confirmed(flips, drop);
+            boolean artefact = rule.map(r -> r.status() == Policy.Status.ARTEFACT).orElse(false);
+            Severity severity = SeverityRules.of(confirmed, significant, pLabelGivenTerm, artefact);
+            return new Finding(term(), kind, severity, label(), support, entry.importance(), z, confirmed, z, pmi,
+                    pLabelGivenTerm, df, entry.meanWeight(), entry.signConsistency(), entry.selected(),
+                    rule.map(r -> r.status() == Policy.Status.ACCEPTED).orElse(false),
+                    rule.map(r -> r.status().key()).orElse(null), rule.map(Policy.Rule::note).orElse(null),
+                    kindShares, flips, drop, entry.examples());
+        }
+    }
+
+    /** The outcome: the candidates, and the test bookkeeping for the summary. */
+    record Outcome(List<Candidate> candidates, int tested, double threshold) {
+    }
+
+    private FindingRules() {
+    }
+
+    static Outcome apply(TermWeights weights, CorpusTerms corpus, Map<String, Double> prior, Policy policy,
+            double alpha) {
+        List<TermWeights.Entry> supporting = new ArrayList<>();
+        for (TermWeights.Entry e : weights.entries()) {
+            if (e.meanWeight() > 0 && prior.containsKey(e.label())) {
+                supporting.add(e);
+            }
+        }
+        int tested = 0;
+        for (TermWeights.Entry e : supporting) {
+            if (support(corpus.df(e.term())) >= MIN_SUPPORT) {
+                tested++;
+            }
+        }
+        double threshold = Association.threshold(alpha, Math.max(1, tested));
+        List<Candidate> candidates = new ArrayList<>();
+        for (TermWeights.Entry e : supporting) {
+            Map<String, Long> df = corpus.df(e.term());
+            long n = support(df);
+            long k = df.getOrDefault(e.label(), 0L);
+            double p0 = prior.get(e.label());
+            double pHat = n == 0 ? Double.NaN : (double) k / n;
+            double z = n >= MIN_SUPPORT ? Association.z(k, n, p0) : Double.NaN;
+            boolean significant = z >= threshold;
+            boolean important = e.importance() >= IMPORTANCE_SHARE * weights.maxImportance(e.label());
+            ArtefactKind kind = corpus.kind(e.term());
+            Optional<Policy.Rule> rule = policy.match(e.term());
+            boolean marked = rule.map(r -> r.status() == Policy.Status.ARTEFACT).orElse(false);
+            if ((important && significant && kind != ArtefactKind.CONTENT) || marked) {
+                Map<String, Double> shares = new LinkedHashMap<>();
+                corpus.kindShares(e.term()).forEach((kk, v) -> shares.put(kk.key(), v));
+                candidates.add(new Candidate(e, kind, n, z, Association.pmi(pHat, p0), pHat, df, shares,
+                        significant, rule));
+            }
+        }
+        return new Outcome(candidates, tested, threshold);
+    }
+
+    /** Findings in report order: severity, then importance, then term and label. */
+    static final Comparator<Finding> ORDER = Comparator.comparing(Finding::severity)
+            .thenComparing(Comparator.comparingDouble(Finding::importance).reversed())
+            .thenComparing(Finding::term).thenComparing(Finding::label);
+
+    private static long support(Map<String, Long> df) {
+        return df.values().stream().mapToLong(Long::longValue).sum();
+    }
+}
