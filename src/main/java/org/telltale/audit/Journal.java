@@ -1,0 +1,247 @@
+package org.telltale.audit;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.LinkOption;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.telltale.TelltaleException;
+
+/**
+ * The append-only record of an audit's finished work, one JSON object per line, each line forced
+ * to disk before the next piece of work starts: a {@code start} line with the run's fingerprint,
+ * one {@code scored} line per scored batch of the corpus, and one {@code explained} line per
+ * explained document (the explanation in the {@code telltale.explanations} line form). A killed
+ * audit leaves at most one torn last line, which {@link #resume} cuts off; everything before it is
+ * kept and not redone.
+ *
+ * <p>Not thread-safe: one audit appends from one thread.
+ */
+public final class Journal implements AutoCloseable {
+    private static final ObjectMapper MAPPER = new ObjectMapper();
+
+    /** One scored batch: the documents' ids and the labels the model predicted for them. */
+    public record ScoredBatch(int batch, List<String> ids, List<String> predicted, long retries) {
+        public ScoredBatch {
+            ids = List.copyOf(ids);
+            predicted = List.copyOf(predicted);
+        }
+    }
+
+    private final Path file;
+    private final FileChannel channel;
+    private final Map<Integer, ScoredBatch> scored;
+    private final Map<String, String> explained;
+    private long journaledRetries;
+
+    private Journal(Path file, FileChannel channel, Map<Integer, ScoredBatch> scored, Map<String, String> explained,
+            long journaledRetries) {
+        this.file = file;
+        this.channel = channel;
+        this.scored = scored;
+        this.explained = explained;
+        this.journaledRetries = journaledRetries;
+    }
+
+    /** Starts a new journal at {@code file}, replacing any old one. */
+    public static Journal create(Path file, String fingerprint) {
+        try {
+            refuseLink(file);
+            FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.WRITE,
+                    StandardOpenOption.TRUNCATE_EXISTING, LinkOption.NOFOLLOW_LINKS);
+            Journal journal = new Journal(file, channel, new LinkedHashMap<>(), new LinkedHashMap<>(), 0);
+            ObjectNode start = MAPPER.createObjectNode();
+            start.put("type", "start");
+            start.put("fingerprint", fingerprint);
+            journal.append(start.toString());
+            return journal;
+        } catch (IOException e) {
+            throw new TelltaleException("cannot write journal " + file + ": " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Opens the journal of an interrupted audit: checks that it was written by the same run
+     * (fingerprint), cuts off a torn last line, and loads the finished work.
+     */
+    public static Journal resume(Path file, String fingerprint) {
+        if (!Files.isRegularFile(file, LinkOption.NOFOLLOW_LINKS)) {
+            throw new TelltaleException("nothing to resume: no journal at " + file);
+        }
+        try {
+            byte[] bytes = Files.readAllBytes(file);
+            int end = bytes.length;
+            while (end > 0 && bytes[end - 1] != '\n') {
+                end--; // the torn tail of a line that was being written when the run was killed
+            }
+            String text = new String(bytes, 0, end, StandardCharsets.UTF_8);
+            String[] lines = text.isEmpty() ? new String[0] : text.split("\n", -1);
+            Map<Integer, ScoredBatch> scored = new LinkedHashMap<>();
+            Map<String, String> explained = new LinkedHashMap<>();
+            long retries = 0;
+            boolean started = false;
+            for (int i = 0; i < lines.length; i++) {
+                if (lines[i].isEmpty()) {
+                    continue;
+                }
+                JsonNode node = parse(lines[i], file, i + 1);
+                String type = node.path("type").asText();
+                switch (type) {
+                    case "start" -> {
+                        String was = node.path("fingerprint").asText();
+                        if (!was.equals(fingerprint)) {
+                            throw new TelltaleException(file + " was written by an audit with other settings, model or "
+                                    + "corpus; rerun without --resume and with --force to start over (journal: " + was
+                                    + "; now: " + fingerprint + ")");
+                        }
+                        started = true;
+                    }
+                    case "scored" -> {
+                        ScoredBatch batch = new ScoredBatch(node.path("batch").asInt(), strings(node.path("ids")),
+                                strings(node.path("predicted")), node.path("retries").asLong());
+                        if (batch.ids().size() != batch.predicted().size()) {
+                            throw new TelltaleException(file + ":" + (i + 1) + ": batch " + batch.batch()
+                                    + " has " + batch.ids().size() + " ids but " + batch.predicted().size() + " labels");
+                        }
+                        scored.put(batch.batch(), batch);
+                        retries += batch.retries();
+                    }
+                    case "explained" -> {
+                        JsonNode explanation = node.get("explanation");
+                        if (explanation == null || !explanation.isObject()) {
+                            throw new TelltaleException(file + ":" + (i + 1) + ": explained line without an explanation");
+                        }
+                        explained.put(node.path("id").asText(), explanation.toString());
+                        retries += node.path("retries").asLong();
+                    }
+                    default -> throw new TelltaleException(file + ":" + (i + 1) + ": unknown journal line type '" + type + "'");
+                }
+                if (!started) {
+                    throw new TelltaleException(file + ":" + (i + 1) + ": the journal does not begin with its start line");
+                }
+            }
+            if (!started) {
+                throw new TelltaleException(file + " is empty: nothing to resume; rerun with --force to start over");
+            }
+            FileChannel channel = FileChannel.open(file, StandardOpenOption.WRITE, LinkOption.NOFOLLOW_LINKS);
+            channel.truncate(end);
+            channel.position(end);
+            channel.force(true);
+            return new Journal(file, channel, scored, explained, retries);
+        } catch (IOException e) {
+            throw new TelltaleException("cannot read journal " + file + ": " + e.getMessage(), e);
+        }
+    }
+
+    public Path file() {
+        return file;
+    }
+
+    /** The finished batch {@code batch}, or {@code null}. */
+    public ScoredBatch scored(int batch) {
+        return scored.get(batch);
+    }
+
+    /** The explanation line of the finished document {@code id}, or {@code null}. */
+    public String explained(String id) {
+        return explained.get(id);
+    }
+
+    /** Number of documents explained so far. */
+    public int explainedCount() {
+        return explained.size();
+    }
+
+    /** Retries counted in the journal, earlier runs included. */
+    public long retries() {
+        return journaledRetries;
+    }
+
+    public void appendScored(int batch, List<String> ids, List<String> predicted, long retries) {
+        ObjectNode node = MAPPER.createObjectNode();
+        node.put("type", "scored");
+        node.put("batch", batch);
+        ArrayNode idArray = node.putArray("ids");
+        ids.forEach(idArray::add);
+        ArrayNode labels = node.putArray("predicted");
+        predicted.forEach(labels::add);
+        node.put("retries", retries);
+        append(node.toString());
+        scored.put(batch, new ScoredBatch(batch, ids, predicted, retries));
+        journaledRetries += retries;
+    }
+
+    /** Appends the explanation of {@code id}; {@code explanationJson} is one JSON object. */
+    public void appendExplained(String id, String explanationJson, long retries) {
+        ObjectNode node = MAPPER.createObjectNode();
+        node.put("type", "explained");
+        node.put("id", id);
+        node.put("retries", retries);
+        String head = node.toString();
+        // The explanation goes in as written by its own writer, so the journal keeps its bytes.
+        append(head.substring(0, head.length() - 1) + ",\"explanation\":" + explanationJson.strip() + "}");
+        explained.put(id, explanationJson.strip());
+        journaledRetries += retries;
+    }
+
+    private void append(String line) {
+        if (line.indexOf('\n') >= 0) {
+            throw new IllegalArgumentException("a journal line must not contain a newline");
+        }
+        try {
+            ByteBuffer buffer = ByteBuffer.wrap((line + "\n").getBytes(StandardCharsets.UTF_8));
+            while (buffer.hasRemaining()) {
+                channel.write(buffer);
+            }
+            channel.force(false);
+        } catch (IOException e) {
+            throw new TelltaleException("cannot append to journal " + file + ": " + e.getMessage(), e);
+        }
+    }
+
+    @Override
+    public void close() {
+        try {
+            channel.close();
+        } catch (IOException e) {
+            throw new TelltaleException("cannot close journal " + file + ": " + e.getMessage(), e);
+        }
+    }
+
+    private static JsonNode parse(String line, Path file, int number) {
+        try {
+            JsonNode node = MAPPER.readTree(line);
+            if (node == null || !node.isObject()) {
+                throw new TelltaleException(file + ":" + number + ": a journal line must be a JSON object");
+            }
+            return node;
+        } catch (JsonProcessingException e) {
+            throw new TelltaleException(file + ":" + number + ": damaged journal line (" + e.getOriginalMessage()
+                    + "); rerun with --force to start over");
+        }
+    }
+
+    private static List<String> strings(JsonNode array) {
+        List<String> out = new ArrayList<>();
+        array.forEach(v -> out.add(v.asText()));
+        return out;
+    }
+
+    private static void refuseLink(Path file) {
+        if (Files.isSymbolicLink(file)) {
+            throw new TelltaleException("refusing to write through a symbolic link: " + file);
+        }
+    }
+}
