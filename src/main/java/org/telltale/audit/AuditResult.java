@@ -56,8 +56,8 @@ public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> s
      * @param zThreshold        the Bonferroni-corrected one-sided critical value
      * @param termsTested       (term, label) pairs tested, the Bonferroni divisor
      * @param pickCoverage      share of the total importance the picked documents cover
-     * @param elapsedMs         wall time of the run, resumed parts included; the only field that is
-     *                          allowed to differ between a resumed and an uninterrupted run
+     * @param elapsedMs         wall time of this invocation; with {@code retries}, the only fields
+     *                          that may differ between a resumed and an uninterrupted run
      */
     public record Summary(
             long documents,

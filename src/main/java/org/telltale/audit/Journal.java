@@ -32,12 +32,27 @@ import org.telltale.TelltaleException;
 public final class Journal implements AutoCloseable {
     private static final ObjectMapper MAPPER = new ObjectMapper();
 
-    /** One scored batch: the documents' ids and the labels the model predicted for them. */
-    public record ScoredBatch(int batch, List<String> ids, List<String> predicted, long retries) {
+    /**
+     * One scored batch: a hash of its documents' ids (to notice a corpus that changed), the model's
+     * labels, and the label the model predicted for each document.
+     */
+    public record ScoredBatch(int batch, long idsHash, List<String> labels, List<String> predicted, long retries) {
         public ScoredBatch {
-            ids = List.copyOf(ids);
+            labels = List.copyOf(labels);
             predicted = List.copyOf(predicted);
         }
+    }
+
+    /** The hash a scored line keeps of its batch's ids: 64-bit FNV-1a over the ids, each ended by a NUL. */
+    public static long idsHash(List<String> ids) {
+        long h = 0xcbf29ce484222325L;
+        for (String id : ids) {
+            for (byte b : (id + '\u0000').getBytes(StandardCharsets.UTF_8)) {
+                h ^= b & 0xff;
+                h *= 0x100000001b3L;
+            }
+        }
+        return h;
     }
 
     private final Path file;
@@ -109,12 +124,10 @@ public final class Journal implements AutoCloseable {
                         started = true;
                     }
                     case "scored" -> {
-                        ScoredBatch batch = new ScoredBatch(node.path("batch").asInt(), strings(node.path("ids")),
-                                strings(node.path("predicted")), node.path("retries").asLong());
-                        if (batch.ids().size() != batch.predicted().size()) {
-                            throw new TelltaleException(file + ":" + (i + 1) + ": batch " + batch.batch()
-                                    + " has " + batch.ids().size() + " ids but " + batch.predicted().size() + " labels");
-                        }
+                        ScoredBatch batch = new ScoredBatch(node.path("batch").asInt(),
+                                Long.parseUnsignedLong(node.path("ids_hash").asText("0"), 16),
+                                interned(strings(node.path("labels"))), interned(strings(node.path("predicted"))),
+                                node.path("retries").asLong());
                         scored.put(batch.batch(), batch);
                         retries += batch.retries();
                     }
@@ -149,9 +162,12 @@ public final class Journal implements AutoCloseable {
         return file;
     }
 
-    /** The finished batch {@code batch}, or {@code null}. */
-    public ScoredBatch scored(int batch) {
-        return scored.get(batch);
+    /**
+     * The finished batch {@code batch}, or {@code null}; handed out once, so that the journal does
+     * not keep the whole corpus's predictions in memory.
+     */
+    public ScoredBatch takeScored(int batch) {
+        return scored.remove(batch);
     }
 
     /** The explanation line of the finished document {@code id}, or {@code null}. */
@@ -169,17 +185,17 @@ public final class Journal implements AutoCloseable {
         return journaledRetries;
     }
 
-    public void appendScored(int batch, List<String> ids, List<String> predicted, long retries) {
+    public void appendScored(int batch, List<String> ids, List<String> labels, List<String> predicted, long retries) {
         ObjectNode node = MAPPER.createObjectNode();
         node.put("type", "scored");
         node.put("batch", batch);
-        ArrayNode idArray = node.putArray("ids");
-        ids.forEach(idArray::add);
-        ArrayNode labels = node.putArray("predicted");
-        predicted.forEach(labels::add);
+        node.put("ids_hash", Long.toHexString(idsHash(ids)));
+        ArrayNode labelArray = node.putArray("labels");
+        labels.forEach(labelArray::add);
+        ArrayNode predictedArray = node.putArray("predicted");
+        predicted.forEach(predictedArray::add);
         node.put("retries", retries);
         append(node.toString());
-        scored.put(batch, new ScoredBatch(batch, ids, predicted, retries));
         journaledRetries += retries;
     }
 
@@ -237,6 +253,12 @@ public final class Journal implements AutoCloseable {
         List<String> out = new ArrayList<>();
         array.forEach(v -> out.add(v.asText()));
         return out;
+    }
+
+    /** The same few label strings over and over: share one instance of each. */
+    private static List<String> interned(List<String> labels) {
+        Map<String, String> pool = new java.util.HashMap<>();
+        return labels.stream().map(l -> pool.computeIfAbsent(l, k -> k)).toList();
     }
 
     private static void refuseLink(Path file) {

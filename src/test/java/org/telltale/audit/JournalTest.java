@@ -20,15 +20,18 @@ class JournalTest {
     void resumeKeepsFinishedWorkAndCutsATornLastLine(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("journal.jsonl");
         try (Journal journal = Journal.create(file, "run-a")) {
-            journal.appendScored(0, List.of("t1", "t2"), List.of("billing", "outage"), 2);
+            journal.appendScored(0, List.of("t1", "t2"), List.of("billing", "outage"), List.of("billing", "outage"), 2);
             journal.appendExplained("t2", "{\"id\":\"t2\",\"label\":\"outage\"}", 1);
         }
         // A kill in the middle of a write leaves part of a line behind.
         Files.writeString(file, "{\"type\":\"explained\",\"id\":\"t1\",\"expl", StandardCharsets.UTF_8,
                 StandardOpenOption.APPEND);
         try (Journal journal = Journal.resume(file, "run-a")) {
-            assertEquals(List.of("billing", "outage"), journal.scored(0).predicted());
-            assertNull(journal.scored(1));
+            Journal.ScoredBatch batch = journal.takeScored(0);
+            assertEquals(List.of("billing", "outage"), batch.predicted());
+            assertEquals(Journal.idsHash(List.of("t1", "t2")), batch.idsHash());
+            assertNull(journal.takeScored(0), "handed out once");
+            assertNull(journal.takeScored(1));
             assertEquals("{\"id\":\"t2\",\"label\":\"outage\"}", journal.explained("t2"));
             assertNull(journal.explained("t1"), "the torn line is not finished work");
             assertEquals(3, journal.retries());

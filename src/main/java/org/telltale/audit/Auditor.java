@@ -1,0 +1,376 @@
+package org.telltale.audit;
+
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.function.Supplier;
+import org.apache.lucene.analysis.Analyzer;
+import org.telltale.TelltaleException;
+import org.telltale.audit.AuditResult.Finding;
+import org.telltale.audit.AuditResult.Scrub;
+import org.telltale.audit.AuditResult.Summary;
+import org.telltale.explain.Explanation;
+import org.telltale.model.ScoreMatrix;
+import org.telltale.model.TextClassifier;
+import org.telltale.text.CorpusReader;
+import org.telltale.text.Document;
+
+/**
+ * Runs one audit: scores the whole corpus in batches, explains a stratified sample, counts the
+ * tested terms across the corpus, decides findings, scrubs and rescores, and picks documents for
+ * the reviewer. The corpus is read as a stream four times at most and never held; what stays in
+ * memory is the sample, two bytes per document for its prediction, bounded line counts, and
+ * counts for the terms the explanations selected.
+ *
+ * <p>Model work is journaled as it finishes, so an audit run again on the same journal redoes
+ * nothing that was finished and ends with the same result. One audit per instance; not
+ * thread-safe.
+ */
+public final class Auditor {
+    /** Line-count table size: about 40 MB at most, enough for corpora far larger than the sample. */
+    static final int LINE_CAPACITY = 400_000;
+
+    /** Where the audit is, for a progress bar; the default does nothing. */
+    public interface Progress {
+        /** A phase begins; {@code total} is -1 when unknown. */
+        default void phase(String name, long total) {
+        }
+
+        default void advance(long steps) {
+        }
+
+        default void done() {
+        }
+
+        Progress SILENT = new Progress() {
+        };
+    }
+
+    /** Explains one document for the label the model predicts. */
+    public interface ExplainStep {
+        Explanation explain(Document document);
+    }
+
+    /** Turns an explanation into one line of JSON and back: the {@code telltale.explanations} line form. */
+    public interface ExplanationCodec {
+        String toLine(Explanation explanation);
+
+        Explanation fromLine(String line, String place);
+    }
+
+    /** An audit's result with the explanations it rests on, in sample order. */
+    public record Outcome(AuditResult result, List<Explanation> explanations) {
+        public Outcome {
+            explanations = List.copyOf(explanations);
+        }
+    }
+
+    private final TextClassifier classifier;
+    private final ExplainStep explainer;
+    private final ExplanationCodec codec;
+    private final Analyzer analyzer;
+    private final AuditSettings settings;
+    private final long seed;
+    private final Policy policy;
+    private final Progress progress;
+
+    private long retriesSeen;
+
+    public Auditor(TextClassifier classifier, ExplainStep explainer, ExplanationCodec codec, Analyzer analyzer,
+            AuditSettings settings, long seed, Policy policy, Progress progress) {
+        this.classifier = Objects.requireNonNull(classifier, "classifier");
+        this.explainer = Objects.requireNonNull(explainer, "explainer");
+        this.codec = Objects.requireNonNull(codec, "codec");
+        this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
+        this.settings = Objects.requireNonNull(settings, "settings");
+        this.seed = seed;
+        this.policy = policy == null ? Policy.empty() : policy;
+        this.progress = progress == null ? Progress.SILENT : progress;
+    }
+
+    /**
+     * What identifies an audit for {@code --resume}: everything that decides its result.
+     * {@code explainSettings} is the explainer's own description of its settings.
+     */
+    public static String fingerprint(AuditSettings settings, long seed, String model, String corpus, long corpusBytes,
+            String explainSettings) {
+        return String.join("|", "telltale.audit/1", settings.toString(), "seed=" + seed, "model=" + model,
+                "corpus=" + corpus, "bytes=" + corpusBytes, explainSettings);
+    }
+
+    /** Runs the audit over {@code corpus} (opened afresh for each pass), journaling into {@code journal}. */
+    public Outcome run(Supplier<CorpusReader> corpus, Journal journal, String model, String corpusName) {
+        long started = System.nanoTime();
+        retriesSeen = classifier.retries();
+
+        Scoring scoring = scoreCorpus(corpus, journal);
+        List<Explanation> explanations = explainSample(corpus, journal, scoring);
+        List<String> labels = scoring.labels;
+
+        TermWeights weights = new TermWeights();
+        explanations.forEach(weights::add);
+        boolean gold = scoring.labelled == scoring.documents;
+        CorpusTerms terms = countTerms(corpus, weights.terms(), labels, scoring, gold);
+        Map<String, Double> prior = new LinkedHashMap<>();
+        terms.labelTotals().forEach((label, n) -> {
+            if (n > 0) {
+                prior.put(label, (double) n / terms.documents());
+            }
+        });
+
+        FindingRules.Outcome rules = FindingRules.apply(weights, terms, prior, policy, settings.alpha());
+        Rewriter rewriter = new Rewriter(analyzer, scoring.repeats::isBoilerplate);
+        ScrubTest scrubTest = new ScrubTest(classifier, rewriter, settings.batch());
+        List<ScrubTest.Scored> explained = scored(explanations, labels, scoring.documentsById);
+
+        progress.phase("scrubbing", rules.candidates().size());
+        List<Finding> findings = new ArrayList<>();
+        for (FindingRules.Candidate c : rules.candidates()) {
+            ScrubTest.Effect effect = scrubTest.term(c.term(), c.label(), explained);
+            findings.add(c.finish(effect.flips(), effect.meanDrop()));
+            progress.advance(1);
+        }
+        findings.sort(FindingRules.ORDER);
+        List<Scrub> scrub = scrubKinds(findings, scrubTest, explained, corpus);
+        progress.done();
+
+        List<SubmodularPick.Row> rows = new ArrayList<>();
+        for (Explanation e : explanations) {
+            Map<String, Double> w = new HashMap<>();
+            e.terms().forEach(t -> w.merge(t.term(), Math.abs(t.weight()), Double::sum));
+            rows.add(new SubmodularPick.Row(e.id(), w));
+        }
+        SubmodularPick.Picks picks = SubmodularPick.pick(rows, settings.picks());
+
+        long retries = journal.retries() + (classifier.retries() - retriesSeen);
+        Summary summary = new Summary(scoring.documents, explanations.size(), labels,
+                scoring.labelled == 0 ? null : (double) scoring.correct / scoring.labelled, scoring.skipped, retries,
+                model, corpusName, seed, settings, gold ? "gold" : "predicted", prior, scoring.predictedCounts(),
+                rules.threshold(), rules.tested(), picks.coverage(), (System.nanoTime() - started) / 1_000_000);
+        return new Outcome(new AuditResult(summary, findings, scrub, picks.ids()), explanations);
+    }
+
+    // ---- pass 1: score every document, count lines, draw the sample
+
+    private static final class Scoring {
+        List<String> labels;
+        long documents;
+        long labelled;
+        long correct;
+        long skipped;
+        long[] predicted;
+        final LabelColumn byPosition = new LabelColumn();
+        final LineRepeats repeats = new LineRepeats(LINE_CAPACITY);
+        StratifiedSample sample;
+        Map<String, Document> documentsById = new HashMap<>();
+
+        Map<String, Long> predictedCounts() {
+            Map<String, Long> out = new LinkedHashMap<>();
+            for (int i = 0; i < labels.size(); i++) {
+                out.put(labels.get(i), predicted[i]);
+            }
+            return out;
+        }
+    }
+
+    private Scoring scoreCorpus(Supplier<CorpusReader> corpus, Journal journal) {
+        Scoring s = new Scoring();
+        s.sample = new StratifiedSample(settings.sample(), seed);
+        progress.phase("scoring", -1);
+        try (CorpusReader reader = corpus.get()) {
+            List<Document> batch = new ArrayList<>(settings.batch());
+            int number = 0;
+            while (reader.hasNext()) {
+                batch.add(reader.next());
+                if (batch.size() == settings.batch()) {
+                    scoreBatch(number++, batch, journal, s);
+                    batch.clear();
+                }
+            }
+            if (!batch.isEmpty()) {
+                scoreBatch(number, batch, journal, s);
+            }
+            s.skipped = reader.skipped().bad();
+        }
+        progress.done();
+        if (s.documents == 0) {
+            throw new TelltaleException("the corpus has no documents to audit");
+        }
+        return s;
+    }
+
+    private void scoreBatch(int number, List<Document> batch, Journal journal, Scoring s) {
+        List<String> ids = batch.stream().map(Document::id).toList();
+        Journal.ScoredBatch done = journal.takeScored(number);
+        List<String> labels;
+        List<String> predicted;
+        if (done != null) {
+            if (done.idsHash() != Journal.idsHash(ids) || done.predicted().size() != ids.size()) {
+                throw new TelltaleException(journal.file() + ": batch " + number + " (documents " + ids.get(0) + " to "
+                        + ids.get(ids.size() - 1) + ") differs from the journal: the corpus changed since the audit "
+                        + "began; rerun without --resume and with --force to start over");
+            }
+            labels = done.labels();
+            predicted = done.predicted();
+        } else {
+            ScoreMatrix scores = classifier.score(batch.stream().map(Document::text).toList(), ids);
+            if (scores.size() != batch.size()) {
+                throw new TelltaleException("the model answered " + scores.size() + " rows for a batch of "
+                        + batch.size() + " (documents " + ids.get(0) + " to " + ids.get(ids.size() - 1) + ")");
+            }
+            labels = scores.labels();
+            predicted = new ArrayList<>();
+            for (int i = 0; i < scores.size(); i++) {
+                predicted.add(scores.predicted(i));
+            }
+            journal.appendScored(number, ids, labels, predicted, newRetries());
+        }
+        if (s.labels == null) {
+            s.labels = List.copyOf(labels);
+            s.predicted = new long[labels.size()];
+        } else if (!s.labels.equals(labels)) {
+            throw new TelltaleException("the model's labels changed during the audit, from " + s.labels + " to "
+                    + labels + " at documents " + ids.get(0) + " to " + ids.get(ids.size() - 1));
+        }
+        for (int i = 0; i < batch.size(); i++) {
+            Document d = batch.get(i);
+            int label = s.labels.indexOf(predicted.get(i));
+            s.documents++;
+            s.predicted[label]++;
+            s.byPosition.add(label);
+            s.repeats.add(d.text());
+            if (d.label() != null) {
+                s.labelled++;
+                if (d.label().equals(predicted.get(i))) {
+                    s.correct++;
+                }
+            }
+            s.sample.offer(d.id(), predicted.get(i), d.label());
+        }
+        progress.advance(batch.size());
+    }
+
+    private long newRetries() {
+        long now = classifier.retries();
+        long delta = now - retriesSeen;
+        retriesSeen = now;
+        return delta;
+    }
+
+    // ---- pass 2: explain the sample
+
+    private List<Explanation> explainSample(Supplier<CorpusReader> corpus, Journal journal, Scoring s) {
+        List<String> ids = s.sample.ids();
+        Set<String> wanted = new HashSet<>(ids);
+        try (CorpusReader reader = corpus.get()) {
+            while (reader.hasNext()) {
+                Document d = reader.next();
+                if (wanted.contains(d.id())) {
+                    s.documentsById.put(d.id(), d);
+                }
+            }
+        }
+        progress.phase("explaining", ids.size());
+        List<Explanation> out = new ArrayList<>();
+        for (String id : ids) {
+            Document d = s.documentsById.get(id);
+            if (d == null) {
+                throw new TelltaleException("document " + id + " was scored but is missing on a second read of the corpus");
+            }
+            String line = journal.explained(id);
+            if (line == null) {
+                line = codec.toLine(explainer.explain(d));
+                journal.appendExplained(id, line, newRetries());
+            }
+            // Always the journaled form: a resumed run and an uninterrupted one see the same numbers.
+            out.add(codec.fromLine(line, journal.file() + " (document " + id + ")"));
+            progress.advance(1);
+        }
+        progress.done();
+        return out;
+    }
+
+    // ---- pass 3: corpus-wide counts for the selected terms
+
+    private CorpusTerms countTerms(Supplier<CorpusReader> corpus, Set<String> selected, List<String> labels, Scoring s,
+            boolean gold) {
+        CorpusTerms terms = new CorpusTerms(selected, labels, analyzer, s.repeats);
+        progress.phase("counting", s.documents);
+        int position = 0;
+        try (CorpusReader reader = corpus.get()) {
+            while (reader.hasNext()) {
+                Document d = reader.next();
+                String basis = gold ? d.label() : labels.get(s.byPosition.get(position));
+                terms.add(d.text(), basis);
+                position++;
+                if (position % 256 == 0) {
+                    progress.advance(256);
+                }
+            }
+        }
+        progress.done();
+        return terms;
+    }
+
+    private static List<ScrubTest.Scored> scored(List<Explanation> explanations, List<String> labels,
+            Map<String, Document> documents) {
+        List<ScrubTest.Scored> out = new ArrayList<>();
+        for (Explanation e : explanations) {
+            double[] row = new double[labels.size()];
+            for (int i = 0; i < labels.size(); i++) {
+                row[i] = e.scores().getOrDefault(labels.get(i), Double.NaN);
+            }
+            out.add(new ScrubTest.Scored(documents.get(e.id()), e.predicted(), row));
+        }
+        return out;
+    }
+
+    // ---- pass 4 (with --scrub-all): scrub per kind
+
+    private List<Scrub> scrubKinds(List<Finding> findings, ScrubTest scrubTest, List<ScrubTest.Scored> explained,
+            Supplier<CorpusReader> corpus) {
+        Map<ArtefactKind, Set<String>> byKind = new EnumMap<>(ArtefactKind.class);
+        for (Finding f : findings) {
+            if (!f.suppressed()) {
+                byKind.computeIfAbsent(f.kind(), k -> new TreeSet<>()).add(f.term());
+            }
+        }
+        List<Scrub> out = new ArrayList<>();
+        for (Map.Entry<ArtefactKind, Set<String>> e : byKind.entrySet()) {
+            ArtefactKind kind = e.getKey();
+            ScrubTest.Effect effect = settings.scrubAll()
+                    ? scrubCorpus(kind, e.getValue(), scrubTest, corpus)
+                    : scrubTest.kind(kind, e.getValue(), explained);
+            out.add(new Scrub(kind, Rewriter.modeOf(kind).key(), List.copyOf(e.getValue()),
+                    settings.scrubAll() ? "corpus" : "explained", effect.documents(), effect.flips(), effect.flipRate(),
+                    effect.meanDrop(), effect.accuracyBefore(), effect.accuracyAfter()));
+        }
+        return out;
+    }
+
+    private ScrubTest.Effect scrubCorpus(ArtefactKind kind, Set<String> terms, ScrubTest scrubTest,
+            Supplier<CorpusReader> corpus) {
+        ScrubTest.Effect sum = ScrubTest.Effect.NONE;
+        try (CorpusReader reader = corpus.get()) {
+            List<Document> chunk = new ArrayList<>(settings.batch());
+            while (reader.hasNext()) {
+                chunk.add(reader.next());
+                if (chunk.size() == settings.batch()) {
+                    sum = sum.plus(scrubTest.kindUnscored(kind, terms, chunk));
+                    chunk.clear();
+                }
+            }
+            if (!chunk.isEmpty()) {
+                sum = sum.plus(scrubTest.kindUnscored(kind, terms, chunk));
+            }
+        }
+        return sum;
+    }
+}
