@@ -1,0 +1,83 @@
+package org.telltale.audit;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.stream.Collectors;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.telltale.audit.AuditResult.Finding;
+import org.telltale.model.NaiveBayesModel;
+import org.telltale.report.json.AuditJson;
+
+/** Audits of the invented Kestrel Valley Utilities mailbox, with and without planted artefacts. */
+class PlantedArtefactAuditTest {
+    private static final long SEED = 42;
+
+    private static String describe(AuditResult result) {
+        return result.findings().stream()
+                .map(f -> f.term() + "/" + f.kind().key() + "/" + f.label() + "/" + f.severity().key()
+                        + (f.confirmed() ? "/confirmed" : "") + " z=" + Math.round(f.z() * 10) / 10.0)
+                .collect(Collectors.joining(", "));
+    }
+
+    private static Optional<Finding> finding(AuditResult result, String term) {
+        return result.findings().stream().filter(f -> f.term().equals(term)).findFirst();
+    }
+
+    @Test
+    void everyPlantedArtefactIsFoundWithItsKindAndTheScrubMovesPredictions(@TempDir Path dir) throws Exception {
+        NaiveBayesModel model = TrainedModels.naiveBayes(UtilityQueues.generate(1, 150, true));
+        Path corpus = UtilityQueues.write(UtilityQueues.generate(2, 120, true), dir.resolve("mailbox.jsonl"));
+        Auditor.Outcome outcome = AuditRuns.run(model, corpus, AuditRuns.settings(45, 300, 8), SEED, Policy.empty(), dir);
+        AuditResult result = outcome.result();
+        Files.writeString(dir.resolve("audit.json"), AuditJson.toJson(result));
+        String found = describe(result);
+
+        assertEquals(360, result.summary().documents());
+        assertEquals(45, result.summary().explained());
+        assertEquals("gold", result.summary().associationBasis());
+        // The planted artefacts of UtilityQueues, each with the place it was planted in.
+        assertEquals(ArtefactKind.HEADER, finding(result, "ivr7").orElseThrow(() -> new AssertionError(found)).kind(), found);
+        assertEquals("outage", finding(result, "ivr7").get().label());
+        assertEquals(ArtefactKind.IDENTIFIER, finding(result, "blq").orElseThrow(() -> new AssertionError(found)).kind(), found);
+        assertEquals(ArtefactKind.ADDRESS,
+                finding(result, "ledgerline.example").orElseThrow(() -> new AssertionError(found)).kind(), found);
+        assertEquals(ArtefactKind.BOILERPLATE,
+                finding(result, "fernhill").orElseThrow(() -> new AssertionError(found)).kind(), found);
+        assertEquals("meter", finding(result, "fernhill").get().label());
+        // Nothing the text itself says is reported as an artefact.
+        assertTrue(result.findings().stream().allMatch(f -> f.kind() != ArtefactKind.CONTENT), found);
+        assertTrue(result.findings().stream().anyMatch(f -> f.severity() == Severity.HIGH), found);
+        // The scrub test proves the dependence: without the artefacts, predictions move and the
+        // predicted queue's score drops, for every kind planted.
+        for (ArtefactKind kind : List.of(ArtefactKind.HEADER, ArtefactKind.ADDRESS, ArtefactKind.IDENTIFIER,
+                ArtefactKind.BOILERPLATE)) {
+            AuditResult.Scrub scrub = result.scrub().stream().filter(s -> s.kind() == kind).findFirst().orElseThrow();
+            assertTrue(scrub.documents() > 0 && scrub.scoreDrop() > 0, scrub.toString());
+        }
+        AuditResult.Scrub boilerplate = result.scrub().stream().filter(s -> s.kind() == ArtefactKind.BOILERPLATE)
+                .findFirst().orElseThrow();
+        assertEquals("lines", boilerplate.mode());
+        assertTrue(boilerplate.flipRate() > 0.1, boilerplate.toString());
+        assertTrue(boilerplate.accuracyAfter() < boilerplate.accuracyBefore(), boilerplate.toString());
+        assertTrue(finding(result, "blq").get().confirmed());
+        assertEquals(5, result.picks().size());
+        assertEquals(45, outcome.explanations().size());
+    }
+
+    @Test
+    void aCleanControlYieldsNoHighFinding(@TempDir Path dir) throws Exception {
+        NaiveBayesModel model = TrainedModels.naiveBayes(UtilityQueues.generate(1, 150, false));
+        Path corpus = UtilityQueues.write(UtilityQueues.generate(2, 120, false), dir.resolve("mailbox.jsonl"));
+        AuditResult result = AuditRuns.run(model, corpus, AuditRuns.settings(45, 300, 8), SEED, Policy.empty(), dir)
+                .result();
+        assertTrue(result.open(Severity.HIGH).isEmpty(), describe(result));
+        assertTrue(result.findings().stream().noneMatch(f -> List.of("ivr7", "web", "fernhill", "kestrel")
+                .contains(f.term())), describe(result));
+    }
+}
