@@ -96,7 +96,8 @@ public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> s
      * @param importance       sqrt of the summed absolute weights over explained documents
      *                         (Ribeiro et al. 2016, §4)
      * @param association      the z-statistic against the label prior; same value as {@code z}
-     * @param confirmed        whether scrubbing the term alone moved predictions
+     * @param confirmed        whether scrubbing its label's flagged terms moved the predictions of
+     *                         explained documents that contain it
      * @param z                one-sided z-statistic (Gardner et al. 2021, Eq. 1, prior as null)
      * @param pmi              log2 p̂(label | term) / p(label)
      * @param pLabelGivenTerm  p̂(label | term) over the corpus
@@ -109,8 +110,9 @@ public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> s
      *                         that matched
      * @param policyNote       the reviewer's note on that rule, or {@code null}
      * @param kindShares       share of the term's corpus occurrences in each place
-     * @param scrubFlips       explained documents whose prediction flipped when the term was removed
-     * @param scrubDrop        mean drop of {@code label}'s score in those documents
+     * @param scrubFlips       explained documents containing it whose prediction flipped when its
+     *                         label's flagged terms were removed together
+     * @param scrubDrop        mean drop of {@code label}'s score in the documents containing it
      * @param examples         explained documents where it was selected, with its spans there
      */
     public record Finding(

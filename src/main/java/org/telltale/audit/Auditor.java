@@ -101,7 +101,10 @@ public final class Auditor {
      */
     public static String fingerprint(AuditSettings settings, long seed, String model, String corpus, long corpusBytes,
             String explainSettings) {
-        return String.join("|", "telltale.audit/1", settings.toString(), "seed=" + seed, "model=" + model,
+        // Everything but the gate: --fail-on changes the exit code, never the work.
+        AuditSettings work = new AuditSettings(settings.sample(), settings.probes(), settings.words(), settings.picks(),
+                settings.scrubAll(), "-", settings.alpha(), settings.batch(), settings.analyzer(), settings.policy());
+        return String.join("|", "telltale.audit/1", work.toString(), "seed=" + seed, "model=" + model,
                 "corpus=" + corpus, "bytes=" + corpusBytes, explainSettings);
     }
 
@@ -131,9 +134,17 @@ public final class Auditor {
         List<ScrubTest.Scored> explained = scored(explanations, labels, scoring.documentsById);
 
         progress.phase("scrubbing", rules.candidates().size());
+        Map<String, Set<String>> groups = new LinkedHashMap<>();
+        for (FindingRules.Candidate c : rules.candidates()) {
+            if (!c.suppressed()) {
+                groups.computeIfAbsent(c.label(), k -> new TreeSet<>()).add(c.term());
+            }
+        }
+        Map<String, Map<String, ScrubTest.Effect>> effects = new HashMap<>();
+        groups.forEach((label, group) -> effects.put(label, scrubTest.group(label, group, explained)));
         List<Finding> findings = new ArrayList<>();
         for (FindingRules.Candidate c : rules.candidates()) {
-            ScrubTest.Effect effect = scrubTest.term(c.term(), c.label(), explained);
+            ScrubTest.Effect effect = effects.getOrDefault(c.label(), Map.of()).getOrDefault(c.term(), ScrubTest.Effect.NONE);
             findings.add(c.finish(effect.flips(), effect.meanDrop()));
             progress.advance(1);
         }

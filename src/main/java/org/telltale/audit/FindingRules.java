@@ -34,14 +34,17 @@ final class FindingRules {
             return entry.label();
         }
 
+        boolean suppressed() {
+            return rule.map(r -> r.status() == Policy.Status.ACCEPTED).orElse(false);
+        }
+
         Finding finish(int flips, double drop) {
             boolean confirmed = SeverityRules.confirmed(flips, drop);
             boolean artefact = rule.map(r -> r.status() == Policy.Status.ARTEFACT).orElse(false);
             Severity severity = SeverityRules.of(confirmed, significant, pLabelGivenTerm, artefact);
             return new Finding(term(), kind, severity, label(), support, entry.importance(), z, confirmed, z, pmi,
                     pLabelGivenTerm, df, entry.meanWeight(), entry.signConsistency(), entry.selected(),
-                    rule.map(r -> r.status() == Policy.Status.ACCEPTED).orElse(false),
-                    rule.map(r -> r.status().key()).orElse(null), rule.map(Policy.Rule::note).orElse(null),
+                    suppressed(), rule.map(r -> r.status().key()).orElse(null), rule.map(Policy.Rule::note).orElse(null),
                     kindShares, flips, drop, entry.examples());
         }
     }

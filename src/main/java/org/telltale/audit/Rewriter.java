@@ -35,6 +35,10 @@ final class Rewriter {
         this.boilerplate = boilerplate;
     }
 
+    Analyzer analyzer() {
+        return analyzer;
+    }
+
     /** Header blocks and repeated lines go whole; addresses, identifiers and content go term by term. */
     static Mode modeOf(ArtefactKind kind) {
         return kind == ArtefactKind.HEADER || kind == ArtefactKind.BOILERPLATE ? Mode.LINES : Mode.TERMS;

@@ -1,11 +1,17 @@
 package org.telltale.audit;
 
 import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.telltale.model.ScoreMatrix;
 import org.telltale.model.TextClassifier;
 import org.telltale.text.Document;
+import org.telltale.text.TermIndex;
+import org.telltale.text.Unit;
+import org.telltale.text.UnitKind;
 
 /**
  * The counterfactual half of an audit: documents rewritten without flagged terms (or the lines
@@ -56,23 +62,42 @@ final class ScrubTest {
     }
 
     /**
-     * Removes {@code term} alone from the documents the model assigned to {@code label} that
-     * contain it: how many change their prediction, and how far {@code label}'s score drops.
+     * Removes the flagged terms of one label together from the documents the model assigned to
+     * that label, and gives, per flagged term, the effect on the documents that contain it: how
+     * many change their prediction and how far the label's score drops. The terms go together
+     * because one label's artefacts are often redundant — a case code and a reply address on the
+     * same ticket — and removing either alone would leave the other to carry the prediction.
      */
-    Effect term(String term, String label, List<Scored> documents) {
+    Map<String, Effect> group(String label, Set<String> terms, List<Scored> documents) {
         List<Scored> changed = new ArrayList<>();
         List<String> texts = new ArrayList<>();
         for (Scored s : documents) {
             if (!s.predicted().equals(label)) {
                 continue;
             }
-            String rewritten = rewriter.scrub(s.doc().text(), ArtefactKind.CONTENT, Set.of(term));
+            String rewritten = rewriter.scrub(s.doc().text(), ArtefactKind.CONTENT, terms);
             if (!rewritten.equals(s.doc().text())) {
                 changed.add(s);
                 texts.add(rewritten);
             }
         }
-        return measure(changed, texts, label);
+        Map<String, Effect> byTerm = new LinkedHashMap<>();
+        for (String term : terms) {
+            byTerm.put(term, Effect.NONE);
+        }
+        List<Effect> effects = perDocument(changed, texts, label);
+        for (int i = 0; i < changed.size(); i++) {
+            Set<String> present = new HashSet<>();
+            for (Unit unit : TermIndex.of(changed.get(i).doc().text(), rewriter.analyzer(), UnitKind.WORD).units()) {
+                present.add(unit.term());
+            }
+            for (String term : terms) {
+                if (present.contains(term)) {
+                    byTerm.merge(term, effects.get(i), Effect::plus);
+                }
+            }
+        }
+        return byTerm;
     }
 
     /** Scrubs {@code terms} as {@code kind} prescribes from every document, and measures the effect. */
@@ -127,34 +152,27 @@ final class ScrubTest {
      * {@code label} is null), and accuracy before and after on the documents with a gold label.
      */
     Effect measure(List<Scored> originals, List<String> texts, String label) {
-        Effect sum = Effect.NONE;
+        return perDocument(originals, texts, label).stream().reduce(Effect.NONE, Effect::plus);
+    }
+
+    /** As {@link #measure}, one effect per document. */
+    List<Effect> perDocument(List<Scored> originals, List<String> texts, String label) {
+        List<Effect> out = new ArrayList<>(texts.size());
         for (int from = 0; from < texts.size(); from += batch) {
             int to = Math.min(texts.size(), from + batch);
             List<String> ids = originals.subList(from, to).stream().map(s -> s.doc().id()).toList();
             ScoreMatrix after = classifier.score(texts.subList(from, to), ids);
             calls++;
-            int flips = 0;
-            double drop = 0;
-            int labelled = 0;
-            int correctBefore = 0;
-            int correctAfter = 0;
             for (int i = from; i < to; i++) {
                 Scored s = originals.get(i);
                 int column = after.labelIndex(label == null ? s.predicted() : label);
                 String now = after.predicted(i - from);
-                if (!now.equals(s.predicted())) {
-                    flips++;
-                }
-                drop += s.scores()[column] - after.score(i - from, column);
                 String gold = s.doc().label();
-                if (gold != null) {
-                    labelled++;
-                    correctBefore += gold.equals(s.predicted()) ? 1 : 0;
-                    correctAfter += gold.equals(now) ? 1 : 0;
-                }
+                out.add(new Effect(1, now.equals(s.predicted()) ? 0 : 1, s.scores()[column] - after.score(i - from, column),
+                        gold == null ? 0 : 1, gold != null && gold.equals(s.predicted()) ? 1 : 0,
+                        gold != null && gold.equals(now) ? 1 : 0));
             }
-            sum = sum.plus(new Effect(to - from, flips, drop, labelled, correctBefore, correctAfter));
         }
-        return sum;
+        return out;
     }
 }

@@ -15,7 +15,10 @@ package org.telltale.audit;
 public final class SeverityRules {
     /** p̂(label | term) at or above which a term nearly decides the label on its own. */
     public static final double STRONG = 0.8;
-    /** Mean drop of the label's score, over documents containing the term, that confirms a finding. */
+    /**
+     * Mean drop of the label's score, over the explained documents that contain the term, that
+     * confirms a finding when its label's flagged terms are scrubbed together.
+     */
     public static final double CONFIRMING_DROP = 0.05;
 
     private SeverityRules() {
@@ -32,7 +35,7 @@ public final class SeverityRules {
         return Severity.LOW;
     }
 
-    /** Whether removing the term moved predictions: a flip, or a mean score drop of at least {@value #CONFIRMING_DROP}. */
+    /** Whether removing the terms moved predictions: a flip, or a mean score drop of at least {@value #CONFIRMING_DROP}. */
     public static boolean confirmed(int flips, double meanDrop) {
         return flips > 0 || meanDrop >= CONFIRMING_DROP;
     }

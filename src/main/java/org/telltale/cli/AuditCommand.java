@@ -1,0 +1,134 @@
+package org.telltale.cli;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.stream.Collectors;
+import org.telltale.ExitCodes;
+import org.telltale.UsageException;
+import org.telltale.audit.AuditResult;
+import org.telltale.audit.AuditSettings;
+import org.telltale.audit.Auditor;
+import org.telltale.audit.Journal;
+import org.telltale.audit.OutputFolder;
+import org.telltale.audit.Policy;
+import org.telltale.audit.Severity;
+import org.telltale.explain.ExplainSettings;
+import org.telltale.explain.Explainer;
+import org.telltale.explain.Explanation;
+import org.telltale.model.TextClassifier;
+import org.telltale.report.json.AuditJson;
+import org.telltale.report.json.ExplanationsJson;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code telltale audit}: corpus-wide evidence and the leakage detector (docs/audit.md). */
+@Command(name = "audit", mixinStandardHelpOptions = false, versionProvider = VersionProvider.class,
+        description = {"Scores a whole corpus, explains a stratified sample, and reports terms the model leans on "
+                + "that sit in headers, addresses, identifiers or boilerplate; proves the dependence by scrubbing.",
+            "Exit codes: 0 clean, 3 findings at or above --fail-on remain, 1 error, 2 usage."})
+final class AuditCommand implements Callable<Integer> {
+    @Mixin CommonOptions common;
+    @Mixin ModelOptions model;
+    @Mixin CorpusOptions corpus;
+    @Mixin AnalyzerOptions analyzer;
+    @Spec CommandSpec spec;
+
+    @Option(names = "--sample", paramLabel = "N", defaultValue = "200", description = "Documents to explain, stratified. Default: ${DEFAULT-VALUE}.")
+    int sample;
+    @Option(names = "--probes", paramLabel = "N", defaultValue = "1000", description = "Probe budget per explanation. Default: ${DEFAULT-VALUE}.")
+    int probes;
+    @Option(names = "--words", paramLabel = "K", defaultValue = "10", description = "Terms per explanation. Default: ${DEFAULT-VALUE}.")
+    int words;
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = "telltale-audit", description = "Output folder. Default: ${DEFAULT-VALUE}.")
+    Path out;
+    @Option(names = "--policy", paramLabel = "FILE", description = "Reviewer decisions: terms or patterns marked accepted or artefact (docs/audit.md).")
+    Path policy;
+    @Option(names = "--fail-on", paramLabel = "LEVEL", defaultValue = "high", description = "Exit 3 when findings at or above high, medium or low remain; never to always exit 0. Default: ${DEFAULT-VALUE}.")
+    String failOn;
+    @Option(names = "--resume", description = "Continue the audit whose journal is in --out, redoing nothing it finished.")
+    boolean resume;
+    @Option(names = "--force", description = "Overwrite an earlier audit in --out, or start an unfinished one over.")
+    boolean force;
+    @Option(names = "--scrub-all", description = "Scrub and rescore the whole corpus, not only the explained documents.")
+    boolean scrubAll;
+    @Option(names = "--picks", paramLabel = "B", defaultValue = "5", description = "Documents the submodular pick chooses for the reviewer. Default: ${DEFAULT-VALUE}.")
+    int picks;
+    @Option(names = "--quiet", description = "No progress bar.")
+    boolean quiet;
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Seed of every random choice. Default: ${DEFAULT-VALUE}.")
+    long seed;
+
+    @Override
+    public Integer call() throws IOException {
+        Severity gate = failOn.equals("never") ? null : severity(failOn);
+        if (resume && force) {
+            throw new UsageException("--resume and --force exclude each other");
+        }
+        if (!corpus.given()) {
+            throw new UsageException("missing --corpus FILE");
+        }
+        AuditSettings settings;
+        try {
+            settings = new AuditSettings(sample, probes, words, picks, scrubAll, failOn, AuditSettings.DEFAULT_ALPHA,
+                    model.settings().batch(), analyzer.spec(), policy == null ? null : policy.getFileName().toString());
+        } catch (IllegalArgumentException e) {
+            throw new UsageException(e.getMessage());
+        }
+        Policy rules = policy == null ? Policy.empty() : Policy.read(policy);
+        OutputFolder folder = OutputFolder.open(out, force, resume);
+        ExplainSettings explain = ExplainSettings.defaults().withWords(words).withProbes(probes).withSeed(seed)
+                .withAnalyzer(analyzer.spec());
+        long corpusBytes = Files.isRegularFile(corpus.path()) ? Files.size(corpus.path()) : 0;
+        Auditor.Progress progress = AuditProgressBar.forTerminal(quiet);
+        Auditor.Outcome outcome;
+        try (TextClassifier classifier = model.open()) {
+            String fingerprint = Auditor.fingerprint(settings, seed, classifier.describe(),
+                    corpus.path().getFileName().toString(), corpusBytes, explain.toString());
+            Path journalFile = folder.file(OutputFolder.JOURNAL);
+            Explainer explainer = new Explainer(classifier, explain);
+            Auditor auditor = new Auditor(classifier, d -> explainer.explain(d, null), new Codec(), analyzer.analyzer(),
+                    settings, seed, rules, progress);
+            try (Journal journal = resume ? Journal.resume(journalFile, fingerprint) : Journal.create(journalFile, fingerprint)) {
+                outcome = auditor.run(corpus::open, journal, classifier.describe(), corpus.path().getFileName().toString());
+            } finally {
+                progress.done();
+            }
+        }
+        List<String> files = new ArrayList<>();
+        files.add(folder.write(OutputFolder.EXPLANATIONS, outcome.explanations().stream()
+                .map(ExplanationsJson::toLine).collect(Collectors.joining("\n", "", "\n"))).toString());
+        files.add(folder.write(OutputFolder.AUDIT, AuditJson.toJson(outcome.result()) + "\n").toString());
+        files.add(folder.file(OutputFolder.JOURNAL).toString());
+        AuditResult result = outcome.result();
+        AuditPrinter.print(spec.commandLine().getOut(), result, files);
+        return gate != null && !result.open(gate).isEmpty() ? ExitCodes.GATE : ExitCodes.OK;
+    }
+
+    private static Severity severity(String level) {
+        try {
+            return Severity.fromKey(level);
+        } catch (IllegalArgumentException e) {
+            throw new UsageException("--fail-on must be high, medium, low or never: " + level);
+        }
+    }
+
+    /** The explanation line form of the telltale.explanations contract, for the journal. */
+    private static final class Codec implements Auditor.ExplanationCodec {
+        @Override
+        public String toLine(Explanation explanation) {
+            return ExplanationsJson.toLine(explanation);
+        }
+
+        @Override
+        public Explanation fromLine(String line, String place) {
+            return ExplanationsJson.fromLine(line, place);
+        }
+    }
+}

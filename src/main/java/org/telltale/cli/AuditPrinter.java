@@ -1,0 +1,68 @@
+package org.telltale.cli;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+import org.telltale.audit.AuditResult;
+import org.telltale.audit.AuditResult.Finding;
+import org.telltale.audit.AuditResult.Scrub;
+
+/** The audit's outcome on the terminal: the top findings, the scrub test and where the files are. */
+final class AuditPrinter {
+    /** Findings shown on the terminal; the rest are in audit.json and the report. */
+    static final int TOP = 15;
+
+    private AuditPrinter() {
+    }
+
+    static void print(PrintWriter out, AuditResult result, List<String> files) {
+        AuditResult.Summary s = result.summary();
+        out.printf(Locale.ROOT, "audited %d documents, explained %d; labels %s%s%n", s.documents(), s.explained(),
+                String.join(", ", s.labels()),
+                s.accuracy() == null ? "" : String.format(Locale.ROOT, "; accuracy %.3f", s.accuracy()));
+        if (s.skipped() > 0 || s.retries() > 0) {
+            out.printf(Locale.ROOT, "skipped %d bad records; the model needed %d retries%n", s.skipped(), s.retries());
+        }
+        List<Finding> findings = result.findings();
+        long open = findings.stream().filter(f -> !f.suppressed()).count();
+        out.printf(Locale.ROOT, "%nfindings: %d (%d suppressed by the policy); z threshold %.2f over %d tests%n",
+                findings.size(), findings.size() - open, s.zThreshold(), s.termsTested());
+        if (!findings.isEmpty()) {
+            out.printf(Locale.ROOT, "  %-8s %-11s %-24s %-12s %7s %8s %6s  %s%n", "severity", "kind", "term", "label",
+                    "docs", "import.", "z", "scrub");
+            for (Finding f : findings.subList(0, Math.min(TOP, findings.size()))) {
+                out.printf(Locale.ROOT, "  %-8s %-11s %-24s %-12s %7d %8.3f %6.1f  %s%s%n", f.severity().key(),
+                        f.kind().key(), clip(f.term(), 24), clip(f.label(), 12), f.support(), f.importance(), f.z(),
+                        f.confirmed() ? "confirmed" : "-", f.suppressed() ? " (suppressed: " + f.policyNote() + ")" : "");
+            }
+            if (findings.size() > TOP) {
+                out.printf(Locale.ROOT, "  … and %d more in audit.json%n", findings.size() - TOP);
+            }
+        }
+        if (!result.scrub().isEmpty()) {
+            out.printf(Locale.ROOT, "%nscrub test (%s documents):%n", result.scrub().get(0).scope());
+            out.printf(Locale.ROOT, "  %-11s %-6s %9s %9s %10s %9s %9s%n", "kind", "mode", "documents", "flip rate",
+                    "score drop", "acc. was", "acc. now");
+            for (Scrub x : result.scrub()) {
+                out.printf(Locale.ROOT, "  %-11s %-6s %9d %9.3f %10.3f %9s %9s%n", x.kind().key(), x.mode(),
+                        x.documents(), x.flipRate(), x.scoreDrop(), share(x.accuracyBefore()), share(x.accuracyAfter()));
+            }
+        }
+        out.println();
+        out.println("Explanations are local approximations of the model, not causes; a clean audit does not certify a model.");
+        out.println("The outputs contain document text: handle them under your organisation's data-protection rules.");
+        for (String file : files) {
+            out.println("wrote " + file);
+        }
+        out.flush();
+    }
+
+    private static String share(Double value) {
+        return value == null ? "-" : String.format(Locale.ROOT, "%.3f", value);
+    }
+
+    private static String clip(String text, int width) {
+        String oneLine = text.replace('\n', ' ').replace('\r', ' ');
+        return oneLine.length() <= width ? oneLine : oneLine.substring(0, width - 1) + "…";
+    }
+}
