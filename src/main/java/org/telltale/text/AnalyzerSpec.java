@@ -1,7 +1,6 @@
 package org.telltale.text;
 
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.HashMap;
@@ -132,11 +131,33 @@ public record AnalyzerSpec(String preset, List<Stage> charFilters, Stage tokeniz
             for (Stage stage : filters) {
                 builder.addTokenFilter(stage.name(), mutable(stage));
             }
-            return builder.build();
-        } catch (IllegalArgumentException e) {
+            Analyzer analyzer = builder.build();
+            tryOnce(analyzer);
+            return analyzer;
+        } catch (IllegalArgumentException | IllegalStateException | IndexOutOfBoundsException e) {
             throw new UsageException("analyzer spec '" + this + "': " + e.getMessage());
         } catch (IOException e) {
-            throw new UncheckedIOException("analyzer spec '" + this + "': cannot load a resource", e);
+            throw new UsageException("analyzer spec '" + this + "': cannot load " + e.getMessage()
+                    + " (parameters naming files are not supported: a stored spec must rebuild anywhere)");
+        }
+    }
+
+    /** Text that reaches most code paths of a chain: letters, digits, punctuation, markup, scripts. */
+    private static final String TRIAL = "Aa Bb Cc Dd Ee Ff Gg Hh Ii Jj Kk Ll Mm Nn Oo Pp Qq Rr Ss Tt Uu Vv Ww Xx Yy Zz 0123456789"
+            + " .,;:!?-_'\"()[]{}<>/\\@#$%&*+=~`|^ <b>x</b> &amp; caf\u00e9 \u65e5\u672c \ud83d\ude00 wi-fi 3.5 U.S.A.\n\r\n";
+
+    /**
+     * Some factories check their parameters only when the first token stream is made (n-gram
+     * sizes, pattern groups); analyzing a trial text once turns those into errors here, where the
+     * spec can be named, rather than in the middle of an audit.
+     */
+    private static void tryOnce(Analyzer analyzer) throws IOException {
+        try (var stream = analyzer.tokenStream("text", TRIAL)) {
+            stream.reset();
+            while (stream.incrementToken()) {
+                // consume
+            }
+            stream.end();
         }
     }
 

@@ -285,6 +285,10 @@ public final class TermIndex {
             stream.end();
         } catch (IOException e) {
             throw new UncheckedIOException("analyzer failed on an in-memory string", e);
+        } catch (IllegalArgumentException | IllegalStateException | IndexOutOfBoundsException e) {
+            // A custom chain whose parameters only fail on some texts (a replacement naming a
+            // group the pattern lacks, say): a clear error rather than a stack trace.
+            throw new org.telltale.TelltaleException("the analyzer failed on a text of " + text.length() + " characters: " + e, e);
         }
     }
 }

@@ -112,4 +112,26 @@ class AnalyzerSpecTest {
         assertTrue(e.getMessage().contains(expected), e.getMessage());
         assertTrue(e.getMessage().contains(spec), e.getMessage());
     }
+
+    @Test
+    void specsThatOnceEscapedAsOtherExceptionsAreRefusedAsUsageErrors() throws java.io.IOException {
+        List<String> specs;
+        try (var in = AnalyzerSpecTest.class.getResourceAsStream("analyzer-specs-refused.txt")) {
+            specs = new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8).lines()
+                    .filter(l -> !l.isBlank() && !l.startsWith("#")).toList();
+        }
+        assertEquals(8, specs.size());
+        for (String spec : specs) {
+            UsageException e = assertThrows(UsageException.class, () -> Analyzers.byName(spec), spec);
+            assertTrue(e.getMessage().startsWith("analyzer spec '"), e.getMessage());
+        }
+    }
+
+    @Test
+    void aChainFailingOnlyOnSomeTextsGivesAClearErrorNotACrash() {
+        // The trial text at build time has no run of five tildes, so the bad group only shows here.
+        var analyzer = Analyzers.byName("custom:tokenizer=keyword;filters=patternreplace(pattern=\"~~~~~\",replacement=\"$7\")");
+        var e = assertThrows(org.telltale.TelltaleException.class, () -> TermIndex.of("x~~~~~y", analyzer, UnitKind.WORD));
+        assertTrue(e.getMessage().startsWith("the analyzer failed on a text of 7 characters"), e.getMessage());
+    }
 }
