@@ -18,7 +18,7 @@ import org.telltale.TelltaleException;
  * }</pre>
  */
 public final class Corpora {
-    /** The longest record read: a JSON line, a CSV field or a {@code .txt} file (32 MiB). */
+    /** The longest JSON line or {@code .txt} file read (32 MiB); longer ones are bad records. */
     public static final int MAX_RECORD_BYTES = 32 * 1024 * 1024;
 
     private Corpora() {
