@@ -39,11 +39,14 @@ public final class ModelFile {
 
     private static final JsonFactory FACTORY = JsonFactory.builder()
             .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+            // Most of a model file is numbers; the fast parser reads them several times quicker, exactly.
+            .enable(StreamReadFeature.USE_FAST_DOUBLE_PARSER)
             .build();
     private static final ObjectMapper MAPPER = JsonMapper.builder(FACTORY)
             .disable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
             .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
             .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .build();
 
     private ModelFile() {
@@ -184,16 +187,40 @@ public final class ModelFile {
      */
     public static BuiltinModel load(Path path) {
         byte[] bytes = readBytes(path);
-        checkHeader(path, bytes);
         Contents contents;
         try {
+            checkHeader(path, bytes);
             contents = MAPPER.readValue(bytes, Contents.class);
+        } catch (JsonEOFException e) {
+            throw truncated(path, e);
         } catch (JsonMappingException e) {
+            if (e.getCause() instanceof JsonEOFException eof) {
+                throw truncated(path, eof);
+            }
+            if (e.getCause() instanceof StreamReadException cause) {
+                throw notJson(path, cause);
+            }
+            if (e.getPath().isEmpty() && String.valueOf(e.getOriginalMessage()).startsWith("Trailing token")) {
+                throw bad(path, "has more content after the model object");
+            }
             throw bad(path, "has field " + fieldPath(e) + " of the wrong type or shape");
+        } catch (StreamReadException e) {
+            throw notJson(path, e);
         } catch (IOException e) {
             throw bad(path, "cannot be read: " + e.getMessage());
         }
         return ModelFileReader.build(path, contents);
+    }
+
+    private static TelltaleException truncated(Path path, JsonEOFException e) {
+        return bad(path, "is truncated: the JSON ends at line " + e.getLocation().getLineNr() + ", column "
+                + e.getLocation().getColumnNr() + " before the model is complete");
+    }
+
+    private static TelltaleException notJson(Path path, StreamReadException e) {
+        String where = e.getLocation() == null ? ""
+                : " (line " + e.getLocation().getLineNr() + ", column " + e.getLocation().getColumnNr() + ")";
+        return bad(path, "is not valid JSON" + where + ": " + e.getOriginalMessage());
     }
 
     private static byte[] readBytes(Path path) {
@@ -210,11 +237,12 @@ public final class ModelFile {
     }
 
     /**
-     * A first, cheap pass over the tokens: is this one complete JSON object, and does it say it is a
-     * model file of a version we read? Doing this before data binding means a newer or foreign file
-     * is reported as such, not as a confusing type error deep inside it.
+     * A first, cheap look at the top-level fields: does the file say it is a model file of a version
+     * we read? Doing this before data binding means a newer or foreign file is reported as such,
+     * not as a confusing type error deep inside it. Our files begin with format and version, so the
+     * look stops there; JSON errors anywhere are left to the binding pass, which reads every token.
      */
-    private static void checkHeader(Path path, byte[] bytes) {
+    private static void checkHeader(Path path, byte[] bytes) throws IOException {
         if (bytes.length == 0) {
             throw bad(path, "is empty");
         }
@@ -237,18 +265,10 @@ public final class ModelFile {
                 } else {
                     p.skipChildren();
                 }
+                if (format != null && version != null) {
+                    break;
+                }
             }
-            if (p.nextToken() != null) {
-                throw bad(path, "has more content after the model object (line " + p.currentLocation().getLineNr() + ")");
-            }
-        } catch (JsonEOFException e) {
-            throw bad(path, "is truncated: the JSON ends at line " + e.getLocation().getLineNr() + ", column "
-                    + e.getLocation().getColumnNr() + " before the model is complete");
-        } catch (StreamReadException e) {
-            throw bad(path, "is not valid JSON (line " + e.getLocation().getLineNr() + ", column "
-                    + e.getLocation().getColumnNr() + "): " + e.getOriginalMessage());
-        } catch (IOException e) {
-            throw bad(path, "cannot be read: " + e.getMessage());
         }
         if (!FORMAT.equals(format)) {
             throw bad(path, "is not a Telltale model file ("

@@ -141,6 +141,12 @@ class ModelFileTest {
     }
 
     @Test
+    void contentAfterTheModelIsRejected() throws IOException {
+        String message = loadError(valid().strip() + " {\"format\":\"telltale.model\"}");
+        assertTrue(message.contains("more content after the model"), message);
+    }
+
+    @Test
     void newerVersionAsksForAnUpgrade() throws IOException {
         String json = valid().replace("\"version\":1", "\"version\":2");
         String message = loadError(json);
