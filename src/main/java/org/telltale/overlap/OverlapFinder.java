@@ -1,6 +1,7 @@
 package org.telltale.overlap;
 
 import java.util.BitSet;
+import java.util.Locale;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.function.Consumer;
@@ -29,6 +30,10 @@ public final class OverlapFinder {
         this.progress = progress;
     }
 
+    private static String seconds(long since) {
+        return String.format(Locale.ROOT, "%.1f s", (System.nanoTime() - since) / 1e9);
+    }
+
     public OverlapResult find(DocumentSource train, DocumentSource test) {
         ExecutorService pool = Executors.newFixedThreadPool(settings.threads(), runnable -> {
             Thread t = new Thread(runnable, "telltale-overlap");
@@ -36,16 +41,23 @@ public final class OverlapFinder {
             return t;
         });
         try {
+            long start = System.nanoTime();
             DocumentTable table = new SignaturePass(settings, pool, progress).read(train, test);
-            progress.accept(String.format(java.util.Locale.ROOT, "signed %,d train and %,d test documents",
-                    table.trainCount, table.size() - table.trainCount));
+            progress.accept(String.format(Locale.ROOT, "signed %,d train and %,d test documents (%s)",
+                    table.trainCount, table.size() - table.trainCount, seconds(start)));
+            start = System.nanoTime();
             int[] rep = ExactGroups.representatives(table);
             long[] candidates = CandidatePairs.find(table, rep, progress);
+            progress.accept("exact groups and banding (" + seconds(start) + ")");
+            start = System.nanoTime();
             PairAssembler assembler = new PairAssembler(table, rep);
             BitSet keepText = settings.keepTexts() ? assembler.groupedDocuments() : new BitSet();
             VerificationPass.Verified verified = new VerificationPass(settings, pool)
                     .run(train, test, table, candidates, keepText);
-            return assembler.assemble(train.name(), test.name(), settings, verified, candidates.length);
+            OverlapResult result = assembler.assemble(train.name(), test.name(), settings, verified, candidates.length);
+            progress.accept(String.format(Locale.ROOT, "second reading and verification: %,d near pairs of distinct texts (%s)",
+                    verified.pairs().length, seconds(start)));
+            return result;
         } finally {
             pool.shutdownNow();
         }
