@@ -14,6 +14,8 @@ import org.telltale.overlap.CorpusFile;
 import org.telltale.overlap.OverlapFinder;
 import org.telltale.overlap.OverlapResult;
 import org.telltale.overlap.OverlapSettings;
+import org.telltale.report.html.HtmlReports;
+import org.telltale.report.html.OverlapReport;
 import org.telltale.report.json.OverlapJson;
 import org.telltale.report.terminal.OverlapSummaryText;
 import org.telltale.text.CorpusFormat;
@@ -88,6 +90,13 @@ final class OverlapCommand implements Callable<Integer> {
     @Option(names = "--texts", description = "Put the texts of paired documents into the JSON.")
     boolean texts;
 
+    @Option(names = "--html", paramLabel = "FILE",
+            description = "Write the pairs side by side, shared passages marked, as a self-contained HTML report.")
+    Path html;
+
+    @Option(names = "--force", description = "Replace an existing --html file.")
+    boolean force;
+
     @Option(names = "--quiet", description = "No progress on stderr.")
     boolean quiet;
 
@@ -110,8 +119,12 @@ final class OverlapCommand implements Callable<Integer> {
             }
         }
         if (json != null) {
-            OverlapJson.write(result, json);
+            OverlapJson.write(texts ? result : result.withoutTexts(), json);
             progress(err, "wrote " + json);
+        }
+        if (html != null) {
+            HtmlReports.write(OverlapReport.render(result), html, force);
+            progress(err, "wrote " + html);
         }
         PrintWriter out = spec.commandLine().getOut();
         out.print(OverlapSummaryText.render(result));
@@ -146,15 +159,11 @@ final class OverlapCommand implements Callable<Integer> {
             throw new UsageException("--threads must be 0 (one per core) or more: " + threads);
         }
         int workers = threads == 0 ? Runtime.getRuntime().availableProcessors() : threads;
-        return new OverlapSettings(threshold, shingle, signature, banding, seed, workers, texts);
+        return new OverlapSettings(threshold, shingle, signature, banding, seed, workers, texts || html != null);
     }
 
     private CorpusSettings corpusSettings() {
-        try {
-            return new CorpusSettings(format == null ? null : CorpusFormat.fromKey(format), idField, textField, labelField, skipBad);
-        } catch (IllegalArgumentException e) {
-            throw new UsageException("--format: " + e.getMessage());
-        }
+        return new CorpusSettings(format == null ? null : CorpusFormat.fromKey(format), idField, textField, labelField, skipBad);
     }
 
     private void progress(PrintWriter err, String line) {

@@ -41,6 +41,11 @@ public record OverlapResult(String trainName, String testName, OverlapSettings s
         return ids;
     }
 
+    /** This result without the documents' texts (for outputs that must not carry them). */
+    public OverlapResult withoutTexts() {
+        return new OverlapResult(trainName, testName, settings, pairs, summary, Map.of(), Map.of(), inflation);
+    }
+
     /** This result with the accuracy figures of a model added. */
     public OverlapResult withInflation(Inflation figures) {
         return new OverlapResult(trainName, testName, settings, pairs, summary, trainTexts, testTexts, figures);
