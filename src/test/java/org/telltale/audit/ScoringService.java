@@ -1,0 +1,104 @@
+package org.telltale.audit;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.sun.net.httpserver.HttpExchange;
+import com.sun.net.httpserver.HttpServer;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.net.InetAddress;
+import java.net.InetSocketAddress;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.telltale.model.ScoreMatrix;
+import org.telltale.model.TextClassifier;
+
+/**
+ * A model service on loopback speaking Telltale's scoring protocol
+ * ({@code {"texts": […]}} → {@code {"labels": […], "scores": [[…]]}}), with scripted faults: one
+ * POST answered 503 (a connector retries it), and from a given POST on, 500 for everything (the
+ * service is down) until {@link #heal()}.
+ */
+final class ScoringService implements AutoCloseable {
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    private final TextClassifier model;
+    private final HttpServer server;
+    private final ExecutorService pool = Executors.newFixedThreadPool(4);
+    final AtomicInteger posts = new AtomicInteger();
+    private volatile int unavailableAt = -1;
+    private volatile int downFrom = Integer.MAX_VALUE;
+
+    ScoringService(TextClassifier model) throws IOException {
+        this.model = model;
+        this.server = HttpServer.create(new InetSocketAddress(InetAddress.getLoopbackAddress(), 0), 50);
+        server.createContext("/score", this::handle);
+        server.setExecutor(pool);
+        server.start();
+    }
+
+    String url() {
+        return "http://127.0.0.1:" + server.getAddress().getPort() + "/score";
+    }
+
+    /** POST number {@code post} (1-based) is answered 503 once; from {@code down} on, every POST gets 500. */
+    void fail(int post, int down) {
+        unavailableAt = post;
+        downFrom = down;
+    }
+
+    void heal() {
+        unavailableAt = -1;
+        downFrom = Integer.MAX_VALUE;
+    }
+
+    private void handle(HttpExchange exchange) throws IOException {
+        try (exchange) {
+            int n = posts.incrementAndGet();
+            if (n == unavailableAt) {
+                send(exchange, 503, "{\"error\":\"warming up\"}");
+                return;
+            }
+            if (n >= downFrom) {
+                send(exchange, 500, "{\"error\":\"down\"}");
+                return;
+            }
+            JsonNode request = JSON.readTree(exchange.getRequestBody());
+            List<String> texts = new ArrayList<>();
+            request.get("texts").forEach(t -> texts.add(t.textValue()));
+            ScoreMatrix scores = model.score(texts);
+            ObjectNode answer = JSON.createObjectNode();
+            ArrayNode labels = answer.putArray("labels");
+            scores.labels().forEach(labels::add);
+            ArrayNode rows = answer.putArray("scores");
+            for (int i = 0; i < scores.size(); i++) {
+                ArrayNode row = rows.addArray();
+                for (double v : scores.row(i)) {
+                    row.add(v);
+                }
+            }
+            send(exchange, 200, answer.toString());
+        }
+    }
+
+    private static void send(HttpExchange exchange, int status, String body) throws IOException {
+        byte[] bytes = body.getBytes(StandardCharsets.UTF_8);
+        exchange.getResponseHeaders().set("Content-Type", "application/json");
+        exchange.sendResponseHeaders(status, bytes.length);
+        try (OutputStream out = exchange.getResponseBody()) {
+            out.write(bytes);
+        }
+    }
+
+    @Override
+    public void close() {
+        server.stop(0);
+        pool.shutdownNow();
+    }
+}
