@@ -1,10 +1,12 @@
 package org.telltale.audit;
 
 import java.util.ArrayList;
-import java.util.HashMap;
+import java.util.Collections;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
+import java.util.TreeSet;
 
 /**
  * Chooses B documents whose explanations together cover the most important terms: the submodular
@@ -14,7 +16,8 @@ import java.util.Set;
  * choice, adding the document with the largest gain each step, is within 1 − 1/e of the best
  * set (Nemhauser, Wolsey and Fisher 1978).
  *
- * <p>Ties go to the earlier document, so the result depends only on the input order.
+ * <p>Ties go to the earlier document, and every sum runs in term order, so the result depends
+ * only on the input order.
  */
 public final class SubmodularPick {
 
@@ -25,10 +28,13 @@ public final class SubmodularPick {
         }
     }
 
-    /** One document's explanation as the pick sees it: the absolute weight of each selected term. */
+    /**
+     * One document's explanation as the pick sees it: the absolute weight of each selected term.
+     * Kept sorted, so that sums run in one order and the result is the same in every JVM.
+     */
     public record Row(String id, Map<String, Double> weights) {
         public Row {
-            weights = Map.copyOf(weights);
+            weights = Collections.unmodifiableMap(new TreeMap<>(weights));
         }
     }
 
@@ -37,7 +43,7 @@ public final class SubmodularPick {
 
     /** Global importance I_j of every term over {@code rows}. */
     public static Map<String, Double> importance(List<Row> rows) {
-        Map<String, Double> sums = new HashMap<>();
+        Map<String, Double> sums = new TreeMap<>();
         for (Row row : rows) {
             row.weights().forEach((term, w) -> sums.merge(term, Math.abs(w), Double::sum));
         }
@@ -47,7 +53,7 @@ public final class SubmodularPick {
 
     /** The coverage c(V) of the rows at {@code picked} indexes. */
     public static double coverage(List<Row> rows, Map<String, Double> importance, List<Integer> picked) {
-        Set<String> covered = new java.util.HashSet<>();
+        Set<String> covered = new TreeSet<>();
         for (int i : picked) {
             rows.get(i).weights().forEach((term, w) -> {
                 if (w != 0) {
