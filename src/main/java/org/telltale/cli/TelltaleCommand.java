@@ -9,7 +9,7 @@ import picocli.CommandLine.Command;
         versionProvider = VersionProvider.class,
         description = "Audits text classifiers trained by someone else: explains predictions, finds leaked artefacts.",
         subcommands = {DemoCommand.class, OverlapCommand.class, TrainCommand.class, ScoreCommand.class, ServeCommand.class,
-                ReportCommand.class, AuditCommand.class})
+                ReportCommand.class, AuditCommand.class, ExplainCommand.class})
 final class TelltaleCommand implements Runnable {
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;

@@ -1,0 +1,177 @@
+package org.telltale.cli;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.concurrent.Callable;
+import org.telltale.ExitCodes;
+import org.telltale.TelltaleException;
+import org.telltale.UsageException;
+import org.telltale.explain.ExplainSettings;
+import org.telltale.explain.Explainer;
+import org.telltale.explain.Explanation;
+import org.telltale.explain.Selection;
+import org.telltale.explain.Weighting;
+import org.telltale.model.TextClassifier;
+import org.telltale.report.json.ExplanationsJson;
+import org.telltale.report.terminal.ExplanationTable;
+import org.telltale.report.terminal.MarkedLine;
+import org.telltale.text.CorpusReader;
+import org.telltale.text.Document;
+import org.telltale.text.UnitKind;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code telltale explain}: local surrogate explanations of single predictions. */
+@Command(name = "explain", mixinStandardHelpOptions = false, versionProvider = VersionProvider.class,
+        description = {"Explains single predictions: which units of the text pushed the model toward a label, by how much,"
+                + " and how sure that is. Explanations are local approximations of the model, not causes."})
+final class ExplainCommand implements Callable<Integer> {
+    @Mixin CommonOptions common;
+    @Mixin ModelOptions model;
+    @Mixin CorpusOptions corpus;
+    @Mixin AnalyzerOptions analyzer;
+    @Spec CommandSpec spec;
+
+    @Option(names = "--text", paramLabel = "STRING", description = "The text to explain (instead of --corpus).")
+    String text;
+    @Option(names = "--doc", paramLabel = "ID", description = "Explain the corpus document with this id (repeatable).")
+    List<String> docs = new ArrayList<>();
+    @Option(names = "--first", paramLabel = "N", description = "Explain the first N corpus documents.")
+    Integer first;
+    @Option(names = "--label", paramLabel = "NAME", description = "The label to explain (default: the predicted one).")
+    String label;
+    @Option(names = "--words", paramLabel = "K", defaultValue = "10", description = "Units to report (default: ${DEFAULT-VALUE}).")
+    int words;
+    @Option(names = "--probes", paramLabel = "N|auto", defaultValue = "" + ExplainSettings.DEFAULT_PROBES,
+            description = "Probe budget, or auto: grow in rounds until the top units are stable (default: ${DEFAULT-VALUE}).")
+    String probes;
+    @Option(names = "--unit", paramLabel = "KIND", defaultValue = "word", description = "word, occurrence or line (default: ${DEFAULT-VALUE}).")
+    String unit;
+    @Option(names = "--select", paramLabel = "HOW", defaultValue = "auto", description = "auto, forward, lars, largest or none (default: ${DEFAULT-VALUE}).")
+    String select;
+    @Option(names = "--bandwidth", paramLabel = "X", defaultValue = "" + ExplainSettings.DEFAULT_BANDWIDTH,
+            description = "Sigma of the cosine kernel (default: ${DEFAULT-VALUE}; see docs/method.md).")
+    double bandwidth;
+    @Option(names = "--weighting", paramLabel = "KIND", defaultValue = "cosine", description = "cosine or shapley (default: ${DEFAULT-VALUE}).")
+    String weighting;
+    @Option(names = "--filler", paramLabel = "TEXT", defaultValue = "", description = "Written in place of each removed unit (default: nothing).")
+    String filler;
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Run seed (default: ${DEFAULT-VALUE}).")
+    long seed;
+    @Option(names = "--json", paramLabel = "FILE|-", description = "Write telltale.explanations JSON to FILE, or to stdout with -.")
+    String json;
+    @Option(names = "--no-color", description = "No ANSI colour, even on a terminal.")
+    boolean noColor;
+
+    @Override
+    public Integer call() throws IOException {
+        List<Document> documents = documents();
+        ExplainSettings settings = settings();
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        boolean jsonOnStdout = "-".equals(json);
+        boolean color = !noColor && !jsonOnStdout && System.console() != null && System.getenv("NO_COLOR") == null
+                && !"dumb".equals(System.getenv("TERM"));
+        List<Explanation> explanations = new ArrayList<>();
+        try (TextClassifier classifier = model.open()) {
+            Explainer explainer = new Explainer(classifier, settings);
+            for (Document doc : documents) {
+                if (documents.size() > 1) {
+                    err.printf(Locale.ROOT, "explaining %s (%d of %d)%n", doc.id(), explanations.size() + 1, documents.size());
+                    err.flush();
+                }
+                Explanation e = explainer.explain(doc, label);
+                explanations.add(e);
+                if (!jsonOnStdout) {
+                    out.print(ExplanationTable.render(e, color));
+                    out.println();
+                    out.print(MarkedLine.render(e, color));
+                    out.println();
+                    out.flush();
+                }
+            }
+        }
+        if (jsonOnStdout) {
+            out.print(ExplanationsJson.toJson(explanations));
+            out.flush();
+        } else if (json != null) {
+            try (OutputStream file = Files.newOutputStream(Path.of(json))) {
+                ExplanationsJson.write(file, explanations);
+            } catch (IOException e) {
+                throw new TelltaleException(json + ": cannot write: " + e.getMessage(), e);
+            }
+        }
+        return ExitCodes.OK;
+    }
+
+    private ExplainSettings settings() {
+        int budget;
+        if ("auto".equals(probes.toLowerCase(Locale.ROOT))) {
+            budget = ExplainSettings.AUTO;
+        } else {
+            try {
+                budget = Integer.parseInt(probes.trim());
+            } catch (NumberFormatException e) {
+                throw new UsageException("--probes must be a number or auto: " + probes);
+            }
+            if (budget < 2) {
+                throw new UsageException("--probes must be auto or at least 2: " + probes);
+            }
+        }
+        try {
+            return ExplainSettings.defaults().withWords(words).withProbes(budget).withUnit(UnitKind.fromKey(unit))
+                    .withSelect(Selection.fromKey(select)).withBandwidth(bandwidth)
+                    .withWeighting(Weighting.fromKey(weighting)).withAnalyzer(analyzer.spec()).withSeed(seed)
+                    .withFiller(filler);
+        } catch (IllegalArgumentException e) {
+            throw new UsageException(e.getMessage());
+        }
+    }
+
+    private List<Document> documents() {
+        if ((text == null) == !corpus.given()) {
+            throw new UsageException("give exactly one of --text STRING or --corpus FILE");
+        }
+        if (text != null) {
+            if (!docs.isEmpty() || first != null) {
+                throw new UsageException("--doc and --first choose corpus documents; they need --corpus");
+            }
+            return List.of(Document.unlabelled("text", text));
+        }
+        if (first != null && first < 1) {
+            throw new UsageException("--first must be at least 1: " + first);
+        }
+        Set<String> wanted = new LinkedHashSet<>(docs);
+        boolean all = docs.isEmpty() && first == null;
+        int leading = 0;
+        List<Document> chosen = new ArrayList<>();
+        try (CorpusReader reader = corpus.open()) {
+            while (reader.hasNext() && (all || !wanted.isEmpty() || (first != null && leading < first))) {
+                Document d = reader.next();
+                boolean named = wanted.remove(d.id());
+                boolean leadingOne = first != null && leading < first;
+                if (leadingOne) {
+                    leading++;
+                }
+                if (all || named || leadingOne) {
+                    chosen.add(d);
+                }
+            }
+        }
+        if (!wanted.isEmpty()) {
+            throw new TelltaleException(corpus.path() + ": no document with id " + String.join(", ", wanted));
+        }
+        return chosen;
+    }
+}
