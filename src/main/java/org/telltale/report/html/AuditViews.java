@@ -13,9 +13,9 @@ import org.telltale.explain.Explanation;
 import org.telltale.text.Span;
 
 /** Builds the {@link AuditView} from an audit result and the explanations it was made of. */
-final class AuditViews {
+public final class AuditViews {
     /** Index rows shown per page of the document browser. */
-    static final int PAGE_SIZE = 50;
+    public static final int PAGE_SIZE = 50;
     /** Documents quoted in context under each finding; the rest are counted and reachable in the browser. */
     static final int CONTEXTS_PER_FINDING = 8;
     private static final int CONTEXT_CHARS = 70;
@@ -43,21 +43,35 @@ final class AuditViews {
                 picks.add(DocumentViews.of(explanations.get(at), "pick-" + picks.size()));
             }
         }
-        List<DocumentView> documents = new ArrayList<>(explanations.size());
-        List<AuditView.IndexRow> index = new ArrayList<>(explanations.size());
-        java.util.Set<String> pickIds = new java.util.HashSet<>(audit.picks());
-        for (int i = 0; i < explanations.size(); i++) {
-            Explanation e = explanations.get(i);
-            DocumentView view = DocumentViews.of(e, "doc-" + i);
-            documents.add(view);
-            String top = e.terms().isEmpty() ? "" : VisibleText.inline(e.terms().get(0).term());
-            index.add(new AuditView.IndexRow(i, view.anchor(), view.id(), view.predicted(), view.gold(), top,
-                    i >= PAGE_SIZE, pickIds.contains(e.id())));
-        }
+        List<DocumentView> documents = documentViews(explanations);
+        List<AuditView.IndexRow> index = index(explanations, documents, new java.util.HashSet<>(audit.picks()));
         AuditResult.Summary s = audit.summary();
         return new AuditView(tiles(audit), VisibleText.inline(s.model()), VisibleText.inline(s.corpus()),
                 verdict(audit), ScrubCharts.of(audit.scrub()), findings, kinds(audit),
                 Scatters.of(findings, s.zThreshold()), picks, missing, index, documents, PAGE_SIZE);
+    }
+
+    /** The views of the browsable documents, anchored {@code doc-0}, {@code doc-1}, … */
+    static List<DocumentView> documentViews(List<Explanation> explanations) {
+        List<DocumentView> documents = new ArrayList<>(explanations.size());
+        for (int i = 0; i < explanations.size(); i++) {
+            documents.add(DocumentViews.of(explanations.get(i), "doc-" + i));
+        }
+        return documents;
+    }
+
+    /** One index row per document; only the first page shows before the script runs. */
+    static List<AuditView.IndexRow> index(List<Explanation> explanations, List<DocumentView> views,
+            java.util.Set<String> pickIds) {
+        List<AuditView.IndexRow> index = new ArrayList<>(explanations.size());
+        for (int i = 0; i < explanations.size(); i++) {
+            Explanation e = explanations.get(i);
+            DocumentView view = views.get(i);
+            String top = e.terms().isEmpty() ? "" : VisibleText.inline(e.terms().get(0).term());
+            index.add(new AuditView.IndexRow(i, view.anchor(), view.id(), view.predicted(), view.gold(), top,
+                    i >= PAGE_SIZE, pickIds.contains(e.id())));
+        }
+        return index;
     }
 
     private static List<AuditView.Tile> tiles(AuditResult audit) {

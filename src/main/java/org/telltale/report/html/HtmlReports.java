@@ -11,7 +11,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Properties;
@@ -30,20 +29,22 @@ public final class HtmlReports {
     private static final TemplateEngine ENGINE = TemplateEngine.createPrecompiled(
             null, ContentType.Html, null, "org.telltale.report.html.templates");
 
+    /** Up to this many explanations are shown one after another; more go into the document browser. */
+    public static final int INLINE_DOCUMENTS = 25;
+
     private HtmlReports() {
     }
 
     /** The document report of one or more explanations, each shown as a highlighted document view. */
     public static String explanations(List<Explanation> explanations) {
-        List<DocumentView> views = new ArrayList<>(explanations.size());
-        for (int i = 0; i < explanations.size(); i++) {
-            views.add(DocumentViews.of(explanations.get(i), "doc-" + i));
-        }
+        List<DocumentView> views = AuditViews.documentViews(explanations);
+        List<AuditView.IndexRow> index = explanations.size() <= INLINE_DOCUMENTS
+                ? List.of() : AuditViews.index(explanations, views, java.util.Set.of());
         String title = explanations.size() == 1
                 ? "Telltale explanation of " + VisibleText.inline(explanations.get(0).id())
                 : "Telltale explanations of " + explanations.size() + " documents";
         String subtitle = explanations.size() == 1 ? "1 document" : explanations.size() + " documents";
-        return render("explanations.jte", Map.of("page", page("Explanations", title, subtitle), "documents", views));
+        return render("explanations.jte", Map.of("page", page("Explanations", title, subtitle), "documents", views, "index", index));
     }
 
     /**

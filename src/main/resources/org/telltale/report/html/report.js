@@ -161,7 +161,10 @@
     };
     var fromHash = function () {
       var anchor = decodeURIComponent(location.hash.slice(1));
-      if (/^doc-[0-9]+$/.test(anchor)) { open(anchor); }
+      if (/^doc-[0-9]+$/.test(anchor) && !open(anchor) && document.readyState === 'loading') {
+        // The script runs before the document templates are parsed; try again once they are.
+        document.addEventListener('DOMContentLoaded', fromHash, {once: true});
+      }
     };
     window.addEventListener('hashchange', fromHash);
     fromHash();

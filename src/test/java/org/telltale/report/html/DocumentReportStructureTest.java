@@ -131,6 +131,18 @@ class DocumentReportStructureTest {
     }
 
     @Test
+    void manyExplanationsGoIntoTheDocumentBrowser() {
+        SampleAudit.Audit audit = SampleAudit.of(HtmlReports.INLINE_DOCUMENTS + 5, 2);
+        Document page = Jsoup.parse(HtmlReports.explanations(audit.explanations()));
+        assertEquals(HtmlReports.INLINE_DOCUMENTS + 5, page.select("#documents template").size());
+        assertEquals(HtmlReports.INLINE_DOCUMENTS + 5, page.select("#tt-index tbody tr").size());
+        assertTrue(page.select("main > article.tt-doc").isEmpty());
+        Document few = Jsoup.parse(HtmlReports.explanations(audit.explanations().subList(0, HtmlReports.INLINE_DOCUMENTS)));
+        assertEquals(HtmlReports.INLINE_DOCUMENTS, few.select("main > article.tt-doc").size());
+        assertTrue(few.select("template").isEmpty());
+    }
+
+    @Test
     void aSpanBeyondTheTextIsAnErrorNamingTheDocument() {
         Explanation e = SampleExplanations.explanation("HL-1", "short text", "billing", "billing",
                 SampleExplanations.scores(0.9, 0.05, 0.05), 10, 0.5,
