@@ -169,4 +169,7 @@
     window.addEventListener('hashchange', fromHash);
     fromHash();
   }
+
+  // Lets a benchmark read when the page became interactive (User Timing API).
+  if (window.performance && performance.mark) { performance.mark('telltale-ready'); }
 }());

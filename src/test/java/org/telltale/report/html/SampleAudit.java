@@ -68,7 +68,7 @@ final class SampleAudit {
             for (String word : candidates(gold)) {
                 if (body.toLowerCase(java.util.Locale.ROOT).contains(word)) {
                     double w = (word.equals("bil") ? 0.25 : word.equals("portal") ? 0.18 : 0.06 + random.nextDouble() * 0.12)
-                            * (random.nextInt(6) == 0 ? -1 : 1);
+                            * (word.equals("bil") || word.equals("portal") || random.nextInt(6) != 0 ? 1 : -1);
                     double half = 0.02 + random.nextDouble() * 0.04;
                     Explanation.TermWeight t = SampleExplanations.term(body, word, w, w - half, w + half);
                     terms.add(t);
