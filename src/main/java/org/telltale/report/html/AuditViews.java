@@ -152,6 +152,15 @@ public final class AuditViews {
                 }
                 int from = safeCut(text, Math.max(0, span.start() - CONTEXT_CHARS));
                 int to = safeCut(text, Math.min(text.length(), span.end() + CONTEXT_CHARS));
+                // Never cut an occurrence in half at the window's edges: widen to take it whole.
+                for (Span other : example.spans()) {
+                    if (other.start() < from && from < other.end()) {
+                        from = other.start();
+                    }
+                    if (other.start() < to && to < other.end() && other.end() <= text.length()) {
+                        to = other.end();
+                    }
+                }
                 contexts.add(new AuditView.Context(VisibleText.inline(example.id()), anchor, from > 0,
                         to < text.length(), MarkedText.window(text, from, to, example.spans(), mark)));
                 covered = to;
