@@ -78,11 +78,14 @@ final class ChunkedClassifier implements TextClassifier {
             if (Thread.currentThread().isInterrupted()) {
                 throw new CancellationException();
             }
+            RawScores raw;
             try {
-                RawScores raw = scorer.score(chunk);
-                return validator.validate(raw, chunk.size(), place);
+                raw = scorer.score(chunk);
             } catch (MalformedResponse bad) {
                 throw new ClassifierException(redactor.redact(place.name() + ": " + bad.getMessage()));
+            } catch (ClassifierException e) {
+                // A final failure (e.g. HTTP 400): name the batch, and make sure no secret travels on.
+                throw new ClassifierException(redactor.redact(place.name() + ": " + e.getMessage()), e.getCause());
             } catch (TransientFailure failure) {
                 if (attempt >= retryPolicy.retries()) {
                     throw new ClassifierException(redactor.redact(place.name() + ": " + failure.getMessage()
@@ -97,7 +100,9 @@ final class ChunkedClassifier implements TextClassifier {
                 }
                 retries.incrementAndGet();
                 sleep(wait);
+                continue;
             }
+            return validator.validate(raw, chunk.size(), place);
         }
     }
 
