@@ -45,6 +45,7 @@ public final class ModelServer implements AutoCloseable {
     private final Semaphore scoring;
     private final PrintStream log;
     private final AtomicInteger served = new AtomicInteger();
+    private final AtomicInteger inFlight = new AtomicInteger();
     private volatile boolean closed;
 
     private ModelServer(HttpServer server, ExecutorService connections, TextClassifier model, List<String> labels,
@@ -104,7 +105,7 @@ public final class ModelServer implements AutoCloseable {
     /** e.g. {@code http://127.0.0.1:43121}. */
     public String url() {
         InetAddress a = server.getAddress().getAddress();
-        String host = a.getHostAddress();
+        String host = a.isAnyLocalAddress() ? settings.host() : a.getHostAddress();
         if (host.contains(":")) {
             host = "[" + host + "]";
         }
@@ -126,9 +127,14 @@ public final class ModelServer implements AutoCloseable {
     }
 
     private void handle(HttpExchange exchange) {
+        inFlight.incrementAndGet();
         try (exchange) {
             served.incrementAndGet();
             try {
+                if (closed) {
+                    exchange.getResponseHeaders().set("Connection", "close");
+                    throw new HttpError(503, "the server is shutting down");
+                }
                 route(exchange);
             } catch (HttpError e) {
                 send(exchange, e.status(), ScoreRequests.error(e.getMessage()));
@@ -141,6 +147,8 @@ public final class ModelServer implements AutoCloseable {
             }
         } catch (IOException e) {
             // Writing the answer failed: the client closed the connection.
+        } finally {
+            inFlight.decrementAndGet();
         }
     }
 
@@ -253,22 +261,26 @@ public final class ModelServer implements AutoCloseable {
         return s.length() <= 80 ? s : s.substring(0, 80) + "…";
     }
 
-    /** Stops accepting, lets requests in flight finish within the drain time, and frees the port. */
+    /**
+     * Stops taking new requests (they get 503), lets requests in flight finish within the drain
+     * time, then frees the port. (HttpServer.stop(delay) alone waits the whole delay on Java 17
+     * even when nothing is in flight, hence the counting here.)
+     */
     @Override
     public void close() {
         if (closed) {
             return;
         }
         closed = true;
-        server.stop((int) Math.max(0, settings.drain().toSeconds()));
-        connections.shutdown();
+        long deadline = System.nanoTime() + settings.drain().toNanos();
         try {
-            if (!connections.awaitTermination(settings.drain().toMillis(), TimeUnit.MILLISECONDS)) {
-                connections.shutdownNow();
+            while (inFlight.get() > 0 && System.nanoTime() < deadline) {
+                Thread.sleep(10);
             }
         } catch (InterruptedException e) {
-            connections.shutdownNow();
             Thread.currentThread().interrupt();
         }
+        server.stop(0);
+        connections.shutdownNow();
     }
 }
