@@ -84,8 +84,6 @@ final class FaultServer implements AutoCloseable {
     }
 
     private void serve(Socket s) {
-        int now = open.incrementAndGet();
-        maxOpen.accumulateAndGet(now, Math::max);
         try (s) {
             s.setSoTimeout(10_000);
             InputStream in = s.getInputStream();
@@ -114,14 +112,19 @@ final class FaultServer implements AutoCloseable {
             posts.incrementAndGet();
             postTimesNanos.add(System.nanoTime());
             if (pauseMillis > 0) {
-                Thread.sleep(pauseMillis);
+                // Counted only while pausing, before answering: a client cannot have its answer yet.
+                int now = open.incrementAndGet();
+                maxOpen.accumulateAndGet(now, Math::max);
+                try {
+                    Thread.sleep(pauseMillis);
+                } finally {
+                    open.decrementAndGet();
+                }
             }
             Fault fault = script.poll();
             act(fault == null ? Fault.OK : fault, s, out, texts(body));
         } catch (IOException | InterruptedException e) {
             // The client gave up (e.g. after its timeout); nothing to do.
-        } finally {
-            open.decrementAndGet();
         }
     }
 
