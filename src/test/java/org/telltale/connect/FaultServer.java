@@ -47,7 +47,7 @@ final class FaultServer implements AutoCloseable {
     final AtomicInteger maxOpen = new AtomicInteger();
     final List<Long> postTimesNanos = new CopyOnWriteArrayList<>();
     final List<String> authorizations = new CopyOnWriteArrayList<>();
-    volatile long slowMillis = 3000;
+    volatile long slowMillis = 2500;
     volatile long pauseMillis = 0;
     volatile String retryAfter = "1";
 

@@ -27,7 +27,7 @@ class HttpFaultTest {
 
     private static ConnectorSettings settings(String url, Protocol p) {
         return ConnectorSettings.of(url).withProtocol(p).withBatch(5).withParallel(1).withRetries(3)
-                .withTimeout(Duration.ofMillis(700)).withBackoff(Duration.ofMillis(5));
+                .withTimeout(Duration.ofMillis(1500)).withBackoff(Duration.ofMillis(5));
     }
 
     private static void assertCorrect(ScoreMatrix m) {
@@ -90,7 +90,7 @@ class HttpFaultTest {
     @EnumSource(Protocol.class)
     void aServiceThatStaysSlowIsAClearError(Protocol p) throws Exception {
         String m = fails(p, null, Fault.SLOW, Fault.SLOW, Fault.SLOW, Fault.SLOW);
-        assertTrue(m.contains("no answer from http://127.0.0.1:") && m.contains("within 700ms (after 3 retries)"), m);
+        assertTrue(m.contains("no answer from http://127.0.0.1:") && m.contains("within 1.5s (after 3 retries)"), m);
     }
 
     @ParameterizedTest
@@ -199,12 +199,13 @@ class HttpFaultTest {
     @EnumSource(Protocol.class)
     void keepsParallelRequestsInFlightAtTheServer(Protocol p) throws Exception {
         try (FaultServer server = new FaultServer(p);
-                TextClassifier c = Connectors.open(settings(server.url(), p).withBatch(1).withParallel(4))) {
+                TextClassifier c = Connectors.open(settings(server.url(), p).withBatch(1).withParallel(4)
+                        .withTimeout(Duration.ofSeconds(10)))) {
             server.pauseMillis = 100;
             List<String> many = java.util.Collections.nCopies(16, "text");
             assertEquals(16, c.score(many).size());
             assertEquals(4, server.maxOpen.get());
-            assertEquals(16, server.posts.get());
+            assertEquals(16 + c.retries(), server.posts.get());
         }
     }
 }
