@@ -153,12 +153,13 @@ final class ModelProcess implements AutoCloseable {
 
     /** The last lines the process wrote to stderr, one line, or "" when it wrote none. */
     String stderrTail() {
-        if (!process.isAlive()) {
-            try {
-                stderrReader.join(1000); // let the reader catch the dying words
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
+        try {
+            // A process that has exited (or was killed): let the reader catch its dying words.
+            if (process.waitFor(1, TimeUnit.SECONDS)) {
+                stderrReader.join(1000);
             }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
         }
         StringBuilder sb = new StringBuilder();
         synchronized (stderrTail) {
