@@ -20,6 +20,7 @@ import org.telltale.explain.ExplainSettings;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
 import org.telltale.model.TextClassifier;
+import org.telltale.report.html.HtmlReports;
 import org.telltale.report.json.AuditJson;
 import org.telltale.report.json.ExplanationsJson;
 import picocli.CommandLine.Command;
@@ -105,6 +106,7 @@ final class AuditCommand implements Callable<Integer> {
         files.add(folder.write(OutputFolder.EXPLANATIONS, outcome.explanations().stream()
                 .map(ExplanationsJson::toLine).collect(Collectors.joining("\n", "", "\n"))).toString());
         files.add(folder.write(OutputFolder.AUDIT, AuditJson.toJson(outcome.result()) + "\n").toString());
+        files.add(folder.write(OutputFolder.REPORT, HtmlReports.audit(outcome.result(), outcome.explanations())).toString());
         files.add(folder.file(OutputFolder.JOURNAL).toString());
         AuditResult result = outcome.result();
         AuditPrinter.print(spec.commandLine().getOut(), result, files);

@@ -39,6 +39,8 @@ class AuditCommandTest {
         assertEquals(300, result.summary().documents());
         assertTrue(!result.open(Severity.HIGH).isEmpty());
         assertEquals(30, ExplanationsJson.read(out.resolve("explanations.jsonl")).size());
+        String report = Files.readString(out.resolve("report.html"), StandardCharsets.UTF_8);
+        assertTrue(report.contains("Telltale audit") && report.contains("ledgerline.example"), "the HTML report names the findings");
         assertEquals(31, Files.readAllLines(out.resolve("journal.jsonl"), StandardCharsets.UTF_8).stream()
                 .filter(l -> !l.contains("\"scored\"")).count(), "a start line and one line per explained document");
 
