@@ -18,7 +18,7 @@ import org.telltale.TelltaleException;
  * }</pre>
  */
 public final class Corpora {
-    /** The longest JSON line or {@code .txt} file read (32 MiB); longer ones are bad records. */
+    /** The longest JSON line or {@code .txt} file read, in bytes, and CSV record, in characters (32 Mi). */
     public static final int MAX_RECORD_BYTES = 32 * 1024 * 1024;
 
     private Corpora() {

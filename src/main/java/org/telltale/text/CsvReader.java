@@ -30,6 +30,9 @@ final class CsvReader extends CorpusReader {
             .setIgnoreEmptyLines(false)
             .get();
 
+    /** Characters one record may take, with room for the parser's read-ahead. */
+    private static final long RECORD_ALLOWANCE = Corpora.MAX_RECORD_BYTES + (1 << 16);
+
     private final String file;
     private final CSVParser parser;
     private final StrictUtf8Reader decoded;
@@ -70,6 +73,7 @@ final class CsvReader extends CorpusReader {
         this.labelColumn = header.get(settings.labelField());
         this.lineAfterPrevious = parser.getCurrentLineNumber();
         this.records = parser.iterator();
+        decoded.allowAtMost(RECORD_ALLOWANCE);
     }
 
     /** Skips a UTF-8 byte-order mark; returns the number of bytes skipped. */
@@ -99,6 +103,10 @@ final class CsvReader extends CorpusReader {
                 record = records.next();
             } catch (UncheckedIOException e) {
                 String where = file + ":" + (lineAfterPrevious + 1);
+                if (e.getCause() instanceof StrictUtf8Reader.RecordTooLongException) {
+                    throw new TelltaleException(where + ": a CSV record longer than " + Corpora.MAX_RECORD_BYTES
+                            + " characters (an unclosed quote?); reading cannot resume after it");
+                }
                 if (e.getCause() instanceof CharacterCodingException) {
                     throw new TelltaleException(where + ": invalid UTF-8 at byte " + decoded.badByte()
                             + " of the file (Telltale reads UTF-8 only; CSV reading cannot resume after it)");
@@ -109,6 +117,7 @@ final class CsvReader extends CorpusReader {
                 throw new TelltaleException(where + ": broken CSV quoting: " + e.getCause().getMessage()
                         + " (RFC 4180: a quoted field ends with a quote followed by a comma or a line end; quotes inside are doubled)");
             }
+            decoded.allowAtMost(RECORD_ALLOWANCE);
             long firstLine = lineAfterPrevious + 1;
             lineAfterPrevious = parser.getCurrentLineNumber();
             if (record.size() == 1 && columns > 1 && record.get(0).isEmpty()) {

@@ -28,6 +28,8 @@ final class StrictUtf8Reader extends Reader {
     private long badByte = -1; // 1-based file position of a bad byte once found
     private boolean eof;
     private boolean done;
+    private long handedOut;
+    private long limit = Long.MAX_VALUE;
 
     /** @param in positioned after any byte-order mark; {@code skipped} bytes come before it */
     StrictUtf8Reader(InputStream in, long skipped) {
@@ -35,6 +37,29 @@ final class StrictUtf8Reader extends Reader {
         this.bytesBefore = skipped;
         chars.flip();
         bytes.flip();
+    }
+
+    /** Characters handed out so far. */
+    long handedOut() {
+        return handedOut;
+    }
+
+    /**
+     * Refuses to hand out more than {@code moreChars} characters beyond those handed out so far:
+     * the next read past them throws {@link RecordTooLongException}. Bounds the memory an
+     * unclosed quote can take.
+     */
+    void allowAtMost(long moreChars) {
+        limit = handedOut + moreChars;
+    }
+
+    /** Thrown when a caller reads past the limit set with {@link #allowAtMost}. */
+    static final class RecordTooLongException extends IOException {
+        private static final long serialVersionUID = 1L;
+
+        RecordTooLongException() {
+            super("record too long");
+        }
     }
 
     /** The 1-based position in the file of the first invalid byte, or -1 when none was met. */
@@ -55,8 +80,12 @@ final class StrictUtf8Reader extends Reader {
                 return -1;
             }
         }
-        int n = Math.min(length, chars.remaining());
+        if (handedOut >= limit) {
+            throw new RecordTooLongException();
+        }
+        int n = (int) Math.min(Math.min(length, chars.remaining()), limit - handedOut);
         chars.get(buffer, offset, n);
+        handedOut += n;
         return n;
     }
 

@@ -166,6 +166,24 @@ class HostileCorpusTest {
     }
 
     @Test
+    void anUnclosedCsvQuoteStopsTheReadOnceTheRecordPassesTheLimit() throws IOException {
+        Path file = dir.resolve("open.csv");
+        try (var out = Files.newOutputStream(file)) {
+            out.write(utf8("id,text\n1,fine\n2,\"never closed\n"));
+            byte[] line = utf8("z".repeat(1023) + "\n");
+            for (int i = 0; i <= Corpora.MAX_RECORD_BYTES / 1024 + 128; i++) {
+                out.write(line);
+            }
+        }
+        try (CorpusReader reader = Corpora.open(file, SKIP)) {
+            assertEquals("fine", reader.next().text());
+            String message = assertThrows(TelltaleException.class, reader::hasNext).getMessage();
+            assertEquals(file + ":3: a CSV record longer than 33554432 characters (an unclosed quote?); reading cannot resume after it",
+                    message);
+        }
+    }
+
+    @Test
     void aMegabyteDocumentWithFiftyThousandDistinctTermsReadsAndIndexesUnderACap() {
         StringBuilder text = new StringBuilder();
         for (int i = 0; text.length() < 1_000_000; i++) {
