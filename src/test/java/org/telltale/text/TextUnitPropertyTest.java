@@ -18,7 +18,7 @@ import org.apache.lucene.analysis.Analyzer;
  * reproduces it). Texts mix words that repeat, punctuation, digits, line ends, CJK, emoji,
  * combining marks and arbitrary code units, so tokenizer edge cases show up.
  */
-class TextUnitProperties {
+class TextUnitPropertyTest {
     private static final List<String> ANALYZERS = List.of("standard", "english", "whitespace",
             "custom:tokenizer=standard;filters=lowercase,worddelimitergraph(preserveOriginal=1)",
             "custom:charfilters=htmlstrip;tokenizer=standard;filters=lowercase");

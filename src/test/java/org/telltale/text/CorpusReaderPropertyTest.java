@@ -22,7 +22,7 @@ import org.telltale.TelltaleException;
  * {@link TelltaleException} naming the file, never another exception. Inputs mix JSON, CSV
  * punctuation, line ends, BOMs and invalid UTF-8 so that the parsers' error paths are reached.
  */
-class CorpusReaderProperties {
+class CorpusReaderPropertyTest {
     private static Path dir;
 
     @BeforeContainer

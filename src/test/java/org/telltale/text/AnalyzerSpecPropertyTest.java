@@ -15,7 +15,7 @@ import org.telltale.UsageException;
  * Any spec string either builds an analyzer that survives arbitrary text, or is refused with a
  * {@link UsageException}; a spec that builds reads back from its canonical form to an equal spec.
  */
-class AnalyzerSpecProperties {
+class AnalyzerSpecPropertyTest {
     private static final List<String> NAMES = List.of("standard", "whitespace", "keyword", "pattern", "ngram", "edgengram",
             "classic", "letter", "uax29urlemail", "pathhierarchy", "lowercase", "uppercase", "porterstem", "kstem", "stop",
             "length", "shingle", "worddelimitergraph", "worddelimiter", "asciifolding", "synonymgraph", "trim", "truncate",
