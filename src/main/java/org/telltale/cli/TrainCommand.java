@@ -83,11 +83,14 @@ final class TrainCommand implements Callable<Integer> {
             throw new TelltaleException("model file " + out + " already exists (use --force to replace it)");
         }
         TrainingOutcome outcome;
-        try (CorpusReader reader = corpus.open()) {
-            outcome = ModelTraining.train(reader, corpus.path(), request);
-        }
         PrintWriter stdout = spec.commandLine().getOut();
         PrintWriter stderr = spec.commandLine().getErr();
+        try (CorpusReader reader = corpus.open()) {
+            outcome = ModelTraining.train(reader, corpus.path(), request);
+            if (!reader.skipped().isEmpty()) {
+                stderr.println("telltale: " + reader.skipped().summary());
+            }
+        }
         try (BuiltinModel model = outcome.model()) {
             ModelFile.save(model, out, force);
             var t = model.training();
