@@ -32,6 +32,8 @@ final class ScoringService implements AutoCloseable {
     private final HttpServer server;
     private final ExecutorService pool = Executors.newFixedThreadPool(4);
     final AtomicInteger posts = new AtomicInteger();
+    /** Every Authorization header value received, to check that a secret did reach the service. */
+    final List<String> authorizations = new java.util.concurrent.CopyOnWriteArrayList<>();
     private volatile int unavailableAt = -1;
     private volatile int downFrom = Integer.MAX_VALUE;
 
@@ -61,6 +63,10 @@ final class ScoringService implements AutoCloseable {
     private void handle(HttpExchange exchange) throws IOException {
         try (exchange) {
             int n = posts.incrementAndGet();
+            String authorization = exchange.getRequestHeaders().getFirst("Authorization");
+            if (authorization != null) {
+                authorizations.add(authorization);
+            }
             if (n == unavailableAt) {
                 send(exchange, 503, "{\"error\":\"warming up\"}");
                 return;
