@@ -71,6 +71,24 @@ class PlantedArtefactAuditTest {
     }
 
     @Test
+    void withoutGoldLabelsAssociationIsMeasuredOnThePredictions(@TempDir Path dir) throws Exception {
+        NaiveBayesModel model = TrainedModels.naiveBayes(UtilityQueues.generate(1, 150, true));
+        List<org.telltale.text.Document> unlabelled = UtilityQueues.generate(2, 120, true).stream()
+                .map(d -> org.telltale.text.Document.unlabelled(d.id(), d.text())).toList();
+        Path corpus = UtilityQueues.write(unlabelled, dir.resolve("mailbox.jsonl"));
+        AuditResult result = AuditRuns.run(model, corpus, AuditRuns.settings(45, 300, 8), SEED, Policy.empty(), dir)
+                .result();
+        assertEquals("predicted", result.summary().associationBasis());
+        assertEquals(null, result.summary().accuracy());
+        // The prior is the model's own share of predictions per label.
+        result.summary().predictedCounts().forEach((label, n) ->
+                assertEquals((double) n / 360, result.summary().prior().get(label), 1e-12));
+        Finding ivr7 = finding(result, "ivr7").orElseThrow(() -> new AssertionError(describe(result)));
+        assertEquals(ArtefactKind.HEADER, ivr7.kind());
+        assertTrue(result.scrub().stream().allMatch(s -> s.accuracyBefore() == null && s.accuracyAfter() == null));
+    }
+
+    @Test
     void aCleanControlYieldsNoHighFinding(@TempDir Path dir) throws Exception {
         NaiveBayesModel model = TrainedModels.naiveBayes(UtilityQueues.generate(1, 150, false));
         Path corpus = UtilityQueues.write(UtilityQueues.generate(2, 120, false), dir.resolve("mailbox.jsonl"));

@@ -108,7 +108,9 @@ final class UtilityQueues {
             ObjectNode node = mapper.createObjectNode();
             node.put("id", d.id());
             node.put("text", d.text());
-            node.put("label", d.label());
+            if (d.label() != null) {
+                node.put("label", d.label());
+            }
             out.append(node).append('\n');
         }
         Files.writeString(file, out, StandardCharsets.UTF_8);
