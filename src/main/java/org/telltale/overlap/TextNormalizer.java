@@ -24,64 +24,64 @@ public final class TextNormalizer {
 
     /** The normalised text whose hash decides exact duplicates. */
     public static String forExact(String text) {
-        return collapse(unquote(fold(text)), false);
+        return normalise(text, false);
     }
 
     /** The normalised text with paragraph breaks kept as {@code '\n'}: the input of shingling. */
     static String forShingles(String text) {
-        return collapse(unquote(fold(text)), true);
+        return normalise(text, true);
     }
 
     static String fold(String text) {
+        if (isAscii(text)) {
+            // ASCII is unchanged by NFKC, and for ASCII upper-then-lower equals lower.
+            return text.toLowerCase(Locale.ROOT);
+        }
         String nfkc = Normalizer.normalize(text, Normalizer.Form.NFKC);
         return nfkc.toUpperCase(Locale.ROOT).toLowerCase(Locale.ROOT);
     }
 
-    /** Drops quote markers at line starts; lines made only of markers become blank lines. */
-    static String unquote(String text) {
-        StringBuilder out = new StringBuilder(text.length());
+    /**
+     * Steps 3 and 4 in one pass over the folded text (for ASCII, folding happens in the same pass):
+     * a {@code >} at a line start counts as white space, so a line of quote markers only is blank.
+     */
+    private static String normalise(String text, boolean keepParagraphs) {
+        boolean ascii = isAscii(text);
+        String in = ascii ? text : fold(text);
+        int n = in.length();
+        char[] out = new char[n];
+        int size = 0;
         boolean lineStart = true;
-        for (int i = 0; i < text.length(); i++) {
-            char c = text.charAt(i);
-            if (c == '\n' || c == '\r') {
+        int newlines = 0;
+        boolean pendingSpace = false;
+        for (int i = 0; i < n; i++) {
+            char c = in.charAt(i);
+            if (c == '\n' || (c == '\r' && (i + 1 >= n || in.charAt(i + 1) != '\n'))) {
+                newlines++;
                 lineStart = true;
-                out.append(c);
-            } else if (lineStart && c == '>') {
-                out.append(' ');
+                pendingSpace = true;
+            } else if (c == '\r' || isSpace(c) || (lineStart && c == '>')) {
+                pendingSpace = true;
             } else {
-                if (!isSpace(c)) {
-                    lineStart = false;
+                if (pendingSpace && size > 0) {
+                    out[size++] = keepParagraphs && newlines >= 2 ? '\n' : ' ';
                 }
-                out.append(c);
+                pendingSpace = false;
+                newlines = 0;
+                lineStart = false;
+                out[size++] = ascii && c >= 'A' && c <= 'Z' ? (char) (c + ('a' - 'A')) : c;
             }
         }
-        return out.toString();
+        return new String(out, 0, size);
     }
 
-    private static String collapse(String text, boolean keepParagraphs) {
-        StringBuilder out = new StringBuilder(text.length());
-        int i = 0;
-        int n = text.length();
-        while (i < n) {
-            char c = text.charAt(i);
-            if (!isSpace(c)) {
-                out.append(c);
-                i++;
-                continue;
-            }
-            int newlines = 0;
-            while (i < n && isSpace(text.charAt(i))) {
-                char s = text.charAt(i);
-                if (s == '\n' || (s == '\r' && (i + 1 >= n || text.charAt(i + 1) != '\n'))) {
-                    newlines++;
-                }
-                i++;
-            }
-            if (out.length() > 0 && i < n) {
-                out.append(keepParagraphs && newlines >= 2 ? '\n' : ' ');
+    private static boolean isAscii(String text) {
+        for (int i = 0; i < text.length(); i++) {
+            if (text.charAt(i) >= 0x80) {
+                return false;
             }
         }
-        return out.toString();
+        return true;
     }
 
     static boolean isSpace(char c) {

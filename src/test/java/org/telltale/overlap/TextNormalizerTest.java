@@ -39,4 +39,23 @@ class TextNormalizerTest {
         assertEquals("first part second part", TextNormalizer.forExact("First part\n\nSecond part"));
         assertNotEquals(TextNormalizer.forExact("one two"), TextNormalizer.forExact("one, two"));
     }
+
+    @Test
+    void foldingAgreesWithTheJdkNormalizerOnRandomText() {
+        // Reference: java.text.Normalizer (the JDK's implementation of UAX #15) followed by
+        // upper- and lower-casing in the root locale; the ASCII shortcut must not change a thing.
+        java.util.Random random = new java.util.Random(3);
+        String alphabet = "aZ09 .,;!?>\t\n-_'\"ÀéßİıﬁＡ①\u00A0\u2028ǅΣς";
+        for (int trial = 0; trial < 2000; trial++) {
+            StringBuilder text = new StringBuilder();
+            int n = random.nextInt(40);
+            boolean ascii = random.nextBoolean();
+            for (int i = 0; i < n; i++) {
+                text.append(ascii ? (char) (32 + random.nextInt(95)) : alphabet.charAt(random.nextInt(alphabet.length())));
+            }
+            String expected = java.text.Normalizer.normalize(text, java.text.Normalizer.Form.NFKC)
+                    .toUpperCase(java.util.Locale.ROOT).toLowerCase(java.util.Locale.ROOT);
+            assertEquals(expected, TextNormalizer.fold(text.toString()), "trial " + trial + ": " + text);
+        }
+    }
 }
