@@ -23,6 +23,8 @@ import org.telltale.text.UnitKind;
  * @param bootstrap  bootstrap resamples for the weight intervals (0 for none)
  * @param level      the coverage of the weight intervals, e.g. 0.95
  * @param stabilityTarget the split-half agreement at which {@link #AUTO} stops
+ * @param maxUnits   the most units one explanation covers; a longer document keeps its most
+ *                   frequent words (or first occurrences or lines) and says so in a note
  */
 public record ExplainSettings(
         int words,
@@ -38,7 +40,8 @@ public record ExplainSettings(
         double ridge,
         int bootstrap,
         double level,
-        double stabilityTarget) {
+        double stabilityTarget,
+        int maxUnits) {
 
     /** The {@link #probes} value that asks for the adaptive budget. */
     public static final int AUTO = 0;
@@ -46,6 +49,8 @@ public record ExplainSettings(
     public static final int DEFAULT_PROBES = 2000;
     /** σ = 0.25: see docs/method.md, "Kernels", for why. */
     public static final double DEFAULT_BANDWIDTH = 0.25;
+    /** Beyond this many units a document is capped: see docs/method.md, "Long documents". */
+    public static final int DEFAULT_MAX_UNITS = 2000;
 
     public ExplainSettings {
         Objects.requireNonNull(unit, "unit");
@@ -74,6 +79,9 @@ public record ExplainSettings(
         if (!(level > 0 && level < 1)) {
             throw new UsageException("the interval level must lie strictly between 0 and 1: " + level);
         }
+        if (maxUnits < 1) {
+            throw new UsageException("the unit cap must be at least 1: " + maxUnits);
+        }
         if (!(stabilityTarget > 0 && stabilityTarget <= 1)) {
             throw new UsageException("the stability target must lie in (0, 1]: " + stabilityTarget);
         }
@@ -82,7 +90,7 @@ public record ExplainSettings(
     /** Ten words, 2,000 probes, word units, automatic selection, σ = 0.25, cosine kernel, seed 1. */
     public static ExplainSettings defaults() {
         return new ExplainSettings(10, DEFAULT_PROBES, 4000, UnitKind.WORD, Selection.AUTO, DEFAULT_BANDWIDTH,
-                Weighting.COSINE, "standard", 1L, "", 1.0, 200, 0.95, 0.9);
+                Weighting.COSINE, "standard", 1L, "", 1.0, 200, 0.95, 0.9, DEFAULT_MAX_UNITS);
     }
 
     public boolean adaptive() {
@@ -96,71 +104,76 @@ public record ExplainSettings(
 
     public ExplainSettings withWords(int v) {
         return new ExplainSettings(v, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget);
+                ridge, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withProbes(int v) {
         return new ExplainSettings(words, v, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget);
+                ridge, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withProbeCap(int v) {
         return new ExplainSettings(words, probes, v, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget);
+                ridge, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withUnit(UnitKind v) {
         return new ExplainSettings(words, probes, probeCap, v, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget);
+                ridge, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withSelect(Selection v) {
         return new ExplainSettings(words, probes, probeCap, unit, v, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget);
+                ridge, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withBandwidth(double v) {
         return new ExplainSettings(words, probes, probeCap, unit, select, v, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget);
+                ridge, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withWeighting(Weighting v) {
         return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, v, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget);
+                ridge, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withAnalyzer(String v) {
         return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, v, seed, filler,
-                ridge, bootstrap, level, stabilityTarget);
+                ridge, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withSeed(long v) {
         return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, v, filler,
-                ridge, bootstrap, level, stabilityTarget);
+                ridge, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withFiller(String v) {
         return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, v,
-                ridge, bootstrap, level, stabilityTarget);
+                ridge, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withRidge(double v) {
         return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                v, bootstrap, level, stabilityTarget);
+                v, bootstrap, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withBootstrap(int v) {
         return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, v, level, stabilityTarget);
+                ridge, v, level, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withLevel(double v) {
         return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, v, stabilityTarget);
+                ridge, bootstrap, v, stabilityTarget, maxUnits);
     }
 
     public ExplainSettings withStabilityTarget(double v) {
         return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, v);
+                ridge, bootstrap, level, v, maxUnits);
+    }
+
+    public ExplainSettings withMaxUnits(int v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
+                ridge, bootstrap, level, stabilityTarget, v);
     }
 }

@@ -56,9 +56,12 @@ public final class Explainer {
      */
     public Explanation explain(Document doc, String labelOrNull) {
         long start = System.nanoTime();
-        TermIndex index = TermIndex.of(doc.text(), analyzer, settings.unit());
+        TermIndex index = TermIndex.of(doc.text(), analyzer, settings.unit(), settings.maxUnits());
         int d = index.size();
         List<String> notes = new ArrayList<>();
+        if (!index.note().isEmpty()) {
+            notes.add(index.note());
+        }
         ProbeRandom random = ProbeRandom.forDocument(settings.seed(), doc.id());
         ProbeRandom sampling = random.split();
         ProbeRandom resampling = random.split();

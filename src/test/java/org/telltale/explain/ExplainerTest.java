@@ -177,4 +177,20 @@ class ExplainerTest {
         assertEquals(List.of("my", "my"), cut);
         assertEquals(0.3, top.weight(), 0.01);
     }
+
+    @Test
+    void aCappedDocumentSaysWhichUnitsItLeftOut() {
+        FunctionClassifier model = new FunctionClassifier(ExplainerTest::linear);
+        Explanation e = new Explainer(model, ExplainSettings.defaults().withMaxUnits(4).withProbes(64)).explain(
+                Document.unlabelled("t8", TEXT), "yes");
+        assertEquals(4, e.method().units());
+        assertTrue(e.method().exact()); // 2^4 subsets fit in 64 probes
+        assertTrue(e.method().notes().stream().anyMatch(n -> n.contains("kept 4 of 13")), e.method().notes().toString());
+        // Kept: "my" (twice), then the earliest: "the", "courier", "lost". "refund" is left out.
+        assertEquals(java.util.Set.of("my", "the", "courier", "lost"),
+                e.terms().stream().map(Explanation.TermWeight::term).collect(java.util.stream.Collectors.toSet()));
+        for (String seen : model.seen) {
+            assertTrue(seen.contains("refund"), "a left-out unit stays in every probe: " + seen);
+        }
+    }
 }
