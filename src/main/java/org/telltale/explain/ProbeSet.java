@@ -20,6 +20,13 @@ import org.telltale.text.TermIndex;
  * <p>Not thread-safe: one instance per document.
  */
 final class ProbeSet {
+    /**
+     * A round goes to the model in one call unless its texts would exceed this many characters
+     * together; then in calls of as many texts as fit (at least one). A 2,000-probe round of a
+     * 5,000-character document is one call; of a 1 MB document, calls of 64 texts.
+     */
+    static final long MAX_CHARS_PER_CALL = 64L << 20;
+
     private final String documentId;
     private final TermIndex index;
     private final Masker masker;
@@ -31,64 +38,75 @@ final class ProbeSet {
     private List<String> labels;
     private long modelNanos;
 
+    private final long maxCharsPerCall;
+
     ProbeSet(String documentId, TermIndex index, Masker masker, TextClassifier classifier) {
+        this(documentId, index, masker, classifier, MAX_CHARS_PER_CALL);
+    }
+
+    ProbeSet(String documentId, TermIndex index, Masker masker, TextClassifier classifier, long maxCharsPerCall) {
+        this.maxCharsPerCall = maxCharsPerCall;
         this.documentId = documentId;
         this.index = index;
         this.masker = masker;
         this.classifier = classifier;
     }
 
-    /** Appends probes (what each removes) and scores the ones not seen before in one call. */
+    /** Appends probes (what each removes) and scores the ones not seen before. */
     void add(List<BitSet> removed) {
-        List<String> texts = new ArrayList<>();
-        List<Integer> pendingRows = new ArrayList<>();
-        List<Integer> pendingSlots = new ArrayList<>();
-        Map<String, Integer> byText = new HashMap<>();
+        List<BitSet> fresh = new ArrayList<>();
         for (BitSet mask : removed) {
-            int row = rows.size();
             rows.add(mask);
             Integer known = byMask.get(mask);
             if (known == null) {
-                String text = masker.mask(index, mask);
-                known = byText.get(text);
-                if (known == null) {
-                    known = -1 - texts.size(); // provisional: the position in this round's call
-                    byText.put(text, known);
-                    texts.add(text);
-                }
+                known = -1 - fresh.size(); // provisional: the position among this round's new masks
                 byMask.put(mask, known);
+                fresh.add(mask);
             }
             rowScores.add(known);
-            if (known < 0) {
-                pendingRows.add(row);
-                pendingSlots.add(-1 - known);
-            }
         }
-        if (texts.isEmpty()) {
+        if (fresh.isEmpty()) {
             return;
         }
-        long start = System.nanoTime();
-        ScoreMatrix answer = classifier.score(texts);
-        modelNanos += System.nanoTime() - start;
-        if (answer.size() != texts.size()) {
-            throw new ClassifierException("document " + documentId + ": the model answered " + answer.size()
-                    + " rows for " + texts.size() + " texts");
+        int[] slot = new int[fresh.size()];
+        int perCall = (int) Math.max(1, Math.min(fresh.size(), maxCharsPerCall / Math.max(1, index.text().length())));
+        for (int from = 0; from < fresh.size(); from += perCall) {
+            int to = Math.min(fresh.size(), from + perCall);
+            // Masked lazily, chunk by chunk, so memory holds one call's texts at most.
+            List<String> texts = new ArrayList<>(to - from);
+            Map<String, Integer> byText = new HashMap<>();
+            for (int k = from; k < to; k++) {
+                String text = masker.mask(index, fresh.get(k));
+                Integer same = byText.putIfAbsent(text, texts.size());
+                slot[k] = scores.size() + (same == null ? texts.size() : same);
+                if (same == null) {
+                    texts.add(text);
+                }
+            }
+            long start = System.nanoTime();
+            ScoreMatrix answer = classifier.score(texts);
+            modelNanos += System.nanoTime() - start;
+            if (answer.size() != texts.size()) {
+                throw new ClassifierException("document " + documentId + ": the model answered " + answer.size()
+                        + " rows for " + texts.size() + " texts");
+            }
+            if (labels == null) {
+                labels = answer.labels();
+            } else if (!labels.equals(answer.labels())) {
+                throw new ClassifierException("document " + documentId + ": the model changed its labels from "
+                        + labels + " to " + answer.labels());
+            }
+            for (int i = 0; i < texts.size(); i++) {
+                scores.add(answer.row(i));
+            }
         }
-        if (labels == null) {
-            labels = answer.labels();
-        } else if (!labels.equals(answer.labels())) {
-            throw new ClassifierException("document " + documentId + ": the model changed its labels from "
-                    + labels + " to " + answer.labels());
+        for (int i = 0; i < rowScores.size(); i++) {
+            int v = rowScores.get(i);
+            if (v < 0) {
+                rowScores.set(i, slot[-1 - v]);
+            }
         }
-        int base = scores.size();
-        for (int i = 0; i < texts.size(); i++) {
-            scores.add(answer.row(i));
-        }
-        // Turn this round's provisional slots into cache positions.
-        for (int k = 0; k < pendingRows.size(); k++) {
-            rowScores.set(pendingRows.get(k), base + pendingSlots.get(k));
-        }
-        byMask.replaceAll((m, v) -> v < 0 ? base - 1 - v : v);
+        byMask.replaceAll((m, v) -> v < 0 ? slot[-1 - v] : v);
     }
 
     int size() {
