@@ -9,8 +9,8 @@ import java.util.List;
  * Regression, 2nd ed., §3.2).
  *
  * <p>It never forms the d×d Gram matrix. The chosen columns are kept as an orthonormal basis
- * q₁…q_k (Gram–Schmidt, re-orthogonalised once, which is enough in floating point — Giraud et al.
- * 2005, "twice is enough"), and every candidate j carries only its coefficients c_jk = q_kᵀx_j.
+ * q₁…q_k (classical Gram–Schmidt, re-orthogonalised once: "twice is enough", Kahan as reported by
+ * Parlett 1980, analysed by Giraud et al. 2005), and every candidate j carries only its coefficients c_jk = q_kᵀx_j.
  * The gain of candidate j is then (x_jᵀr)² / ‖x_j − Σ c_jk q_k‖², computable from c_j alone;
  * adding one term costs one product Xᵀq, O(N·d), so choosing K terms costs O(N·d·K) time and
  * O(N·K + d·K) memory beyond the design itself.
