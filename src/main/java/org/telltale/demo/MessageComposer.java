@@ -93,12 +93,17 @@ final class MessageComposer {
                 "X-Intake-Form: contact-v4");
     }
 
-    /** The customer's request: an opening sentence, some details, perhaps a word of tone. */
+    /**
+     * The customer's request: an opening sentence, usually some details, perhaps a word of tone.
+     * Lead-ins and at least one detail most of the time keep whole lines from repeating verbatim
+     * across many messages, which only boilerplate does.
+     */
     private List<String> paragraph(SupportQueue queue, Writer writer) {
         List<String> sentences = new ArrayList<>();
-        sentences.add(fill(pick(Phrasebook.OPENINGS.get(queue))));
+        String leadIn = random.nextDouble() < 0.6 ? pick(Phrasebook.LEAD_INS) : "";
+        sentences.add(joinLeadIn(leadIn, fill(pick(Phrasebook.OPENINGS.get(queue)))));
         List<String> details = new ArrayList<>(Phrasebook.DETAILS.get(queue));
-        int count = random.nextInt(4);
+        int count = random.nextDouble() < 0.15 ? 0 : 1 + random.nextInt(3);
         for (int i = 0; i < count && !details.isEmpty(); i++) {
             sentences.add(fill(details.remove(random.nextInt(details.size()))));
         }
@@ -107,15 +112,25 @@ final class MessageComposer {
             sentences.add(tone);
         }
         List<String> lines = new ArrayList<>();
-        // Longer requests break into two paragraphs after the opening, as people tend to write them.
-        if (sentences.size() > 2 && random.nextBoolean()) {
-            lines.add(writer.polish(sentences.get(0)));
+        // Longer requests break into two paragraphs, as people tend to write them.
+        if (sentences.size() > 3 && random.nextBoolean()) {
+            lines.add(writer.polish(String.join(" ", sentences.subList(0, 2))));
             lines.add("");
-            lines.add(writer.polish(String.join(" ", sentences.subList(1, sentences.size()))));
+            lines.add(writer.polish(String.join(" ", sentences.subList(2, sentences.size()))));
         } else {
             lines.add(writer.polish(String.join(" ", sentences)));
         }
         return lines;
+    }
+
+    /** "So, " + "The bill..." reads "So, the bill..."; a lead-in that ends a sentence keeps the capital. */
+    static String joinLeadIn(String leadIn, String sentence) {
+        boolean newSentence = leadIn.isEmpty() || leadIn.endsWith(". ") || leadIn.endsWith(": ");
+        boolean pronounI = sentence.startsWith("I ") || sentence.startsWith("I'");
+        if (newSentence || pronounI) {
+            return leadIn + sentence;
+        }
+        return leadIn + sentence.substring(0, 1).toLowerCase(Locale.ROOT) + sentence.substring(1);
     }
 
     private String tone(double probability) {
@@ -207,7 +222,7 @@ final class MessageComposer {
         s = s.replace("{month}", pick(Phrasebook.MONTHS));
         s = s.replace("{amount}", String.format(Locale.ROOT, "£%d.%02d", 3 + random.nextInt(60), random.nextInt(100)));
         s = s.replace("{n}", Integer.toString(2 + random.nextInt(5)));
-        s = s.replace("{time}", pick(List.of("6am", "7:30", "about 8", "half past nine", "early")));
+        s = s.replace("{time}", pick(List.of("6am", "7 o'clock", "about 8", "half past nine", "early")));
         s = s.replace("{town}", pick(Phrasebook.TOWNS));
         s = s.replace("{date}", someDay().getDayOfMonth() + " " + pick(Phrasebook.MONTHS));
         return s;

@@ -149,6 +149,11 @@ final class Phrasebook {
             "Is there any news?",
             "It has been a week now.");
 
+    /** How people start their request. */
+    static final List<String> LEAD_INS = List.of(
+            "So, ", "Quick question. ", "Hello again. ", "As I said on the phone, ", "Basically ", "Just to let you know, ",
+            "Not sure this is the right place but ", "I hope you can help. ", "Me again. ", "Urgent: ", "FYI ");
+
     /** Frustration or warmth that any queue gets. */
     static final List<String> TONE = List.of(
             "This is really frustrating.",
