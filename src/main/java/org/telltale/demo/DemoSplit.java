@@ -1,19 +1,16 @@
 package org.telltale.demo;
 
 import java.util.ArrayList;
-import java.util.Collections;
-import java.util.HashSet;
-import java.util.LinkedHashMap;
+import java.util.BitSet;
 import java.util.List;
-import java.util.Map;
-import java.util.Random;
-import java.util.Set;
+import org.telltale.model.HoldoutSplit;
 import org.telltale.text.Document;
 
 /**
  * The demo's split of a corpus into the messages a model is trained on and the held-out messages
- * it is audited on, stratified by label: each label keeps its share of the held-out part.
- * Depends only on ids, labels and the seed, so the leaky and the clean variant split alike.
+ * it is audited on: exactly the stratified, seeded holdout of {@code telltale train --holdout},
+ * so the held-out file the demo writes is the part the trained model never saw. The choice
+ * depends only on ids, labels and the seed, so the leaky and the clean variant split alike.
  *
  * @param train   training messages, in corpus order
  * @param holdout held-out messages, in corpus order
@@ -24,26 +21,17 @@ public record DemoSplit(List<Document> train, List<Document> holdout) {
         holdout = List.copyOf(holdout);
     }
 
-    /** Holds out {@code share} of each label's messages, rounded, chosen at random with {@code seed}. */
+    /** Holds out {@code share} of each label's messages, rounded, chosen with {@code seed}. */
     public static DemoSplit of(List<Document> docs, double share, long seed) {
         if (!(share > 0 && share < 1)) {
             throw new IllegalArgumentException("holdout share must lie in (0, 1): " + share);
         }
-        Map<String, List<String>> idsByLabel = new LinkedHashMap<>();
-        for (Document doc : docs) {
-            idsByLabel.computeIfAbsent(doc.label(), l -> new ArrayList<>()).add(doc.id());
-        }
-        Set<String> heldOut = new HashSet<>();
-        Random random = new Random(seed);
-        idsByLabel.keySet().stream().sorted().forEach(label -> {
-            List<String> ids = new ArrayList<>(idsByLabel.get(label));
-            Collections.shuffle(ids, random);
-            heldOut.addAll(ids.subList(0, (int) Math.round(share * ids.size())));
-        });
+        BitSet held = HoldoutSplit.choose(docs.stream().map(Document::id).toList(),
+                docs.stream().map(Document::label).toList(), share, seed);
         List<Document> train = new ArrayList<>();
         List<Document> holdout = new ArrayList<>();
-        for (Document doc : docs) {
-            (heldOut.contains(doc.id()) ? holdout : train).add(doc);
+        for (int i = 0; i < docs.size(); i++) {
+            (held.get(i) ? holdout : train).add(docs.get(i));
         }
         return new DemoSplit(train, holdout);
     }

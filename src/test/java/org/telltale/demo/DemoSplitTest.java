@@ -8,7 +8,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.telltale.model.Algorithm;
+import org.telltale.model.BuiltinModel;
+import org.telltale.model.ModelTraining;
+import org.telltale.model.ScoreMatrix;
+import org.telltale.model.TrainingOutcome;
+import org.telltale.model.TrainingRequest;
 import org.telltale.text.Document;
 
 class DemoSplitTest {
@@ -43,6 +51,25 @@ class DemoSplitTest {
         DemoSplit other = DemoSplit.of(CORPUS.leaky(), 0.25, 6);
         assertEquals(ids(leaky.holdout()), ids(clean.holdout()));
         assertNotEquals(ids(leaky.holdout()), ids(other.holdout()));
+    }
+
+    @Test
+    void heldOutMessagesAreExactlyThoseTrainingHoldsOut(@TempDir Path dir) {
+        Path file = CorpusFiles.write(CORPUS, dir).get(0);
+        TrainingRequest request = TrainingRequest.defaults(Algorithm.BAYES).withHoldout(0.3, 5);
+        DemoSplit split = DemoSplit.of(CORPUS.leaky(), 0.3, 5);
+        TrainingOutcome outcome = ModelTraining.train(CORPUS.leaky().iterator(), file, request);
+        try (BuiltinModel model = outcome.model()) {
+            assertEquals(split.train().size(), model.training().trainingDocuments());
+            ScoreMatrix scores = model.score(split.holdout().stream().map(Document::text).toList());
+            long correct = 0;
+            for (int i = 0; i < scores.size(); i++) {
+                correct += scores.predicted(i).equals(split.holdout().get(i).label()) ? 1 : 0;
+            }
+            // Same documents, same model: training's own holdout evaluation must agree exactly.
+            assertEquals(outcome.holdout().total(), split.holdout().size());
+            assertEquals(outcome.holdout().correct(), correct);
+        }
     }
 
     @Test
