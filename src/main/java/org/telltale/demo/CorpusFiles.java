@@ -38,6 +38,16 @@ public final class CorpusFiles {
         }
     }
 
+    /** Writes {@code documents} as one JSON Lines file. */
+    public static Path writeJsonLines(List<Document> documents, Path file) {
+        try {
+            Files.write(file, jsonLines(documents));
+            return file;
+        } catch (IOException e) {
+            throw new TelltaleException("cannot write " + file + ": " + e.getMessage(), e);
+        }
+    }
+
     /** The exact bytes of the JSON Lines file for {@code documents}. */
     public static byte[] jsonLines(List<Document> documents) {
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();

@@ -17,7 +17,12 @@ import java.util.Random;
  */
 final class MessageComposer {
     /** Share of messages that say little more than "any news?" and answer an agent's reply. */
-    static final double FOLLOW_UP_SHARE = 0.20;
+    static final double FOLLOW_UP_SHARE = 0.30;
+    /** Share of follow-ups whose quote still holds the customer's first message. */
+    static final double NESTED_SHARE = 0.40;
+    /** The header line the intake gateway stamps on form and chat messages, and its usual value. */
+    static final String ROUTE_HEADER = "X-Intake-Route: ";
+    static final String GENERAL_ROUTE = "GEN1";
     /** Share of ordinary mail messages that answer an agent's reply. */
     static final double REPLY_SHARE = 0.50;
 
@@ -41,7 +46,7 @@ final class MessageComposer {
         Writer writer = writer();
         boolean followUp = random.nextDouble() < FOLLOW_UP_SHARE;
         if (followUp) {
-            List<String> earlier = random.nextBoolean() ? paragraph(queue, writer) : List.of();
+            List<String> earlier = random.nextDouble() < NESTED_SHARE ? paragraph(queue, writer) : List.of();
             List<String> body = letter(List.of(writer.polish(pick(Phrasebook.FOLLOW_UPS) + tone(0.4))), writer);
             return new MessageDraft(header, body, agentReply(writer, earlier), List.of());
         }
@@ -89,6 +94,7 @@ final class MessageComposer {
         LocalDate day = someDay();
         return List.of(
                 "X-Intake-Channel: " + channel,
+                ROUTE_HEADER + GENERAL_ROUTE,
                 String.format(Locale.ROOT, "X-Intake-Received: %s %02d:%02d", day, 7 + random.nextInt(14), random.nextInt(60)),
                 "X-Intake-Form: contact-v4");
     }

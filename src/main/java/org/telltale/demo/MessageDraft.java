@@ -22,9 +22,14 @@ record MessageDraft(List<String> header, List<String> body, QuotedReply quote, L
         }
     }
 
-    MessageDraft withHeaderLine(int position, String line) {
+    /** The draft with header line {@code old} replaced by {@code replacement}; {@code old} must be there. */
+    MessageDraft withHeaderLineReplaced(String old, String replacement) {
+        int at = header.indexOf(old);
+        if (at < 0) {
+            throw new IllegalArgumentException("no header line '" + old + "'");
+        }
         List<String> h = new ArrayList<>(header);
-        h.add(Math.min(position, h.size()), line);
+        h.set(at, replacement);
         return new MessageDraft(h, body, quote, trailer);
     }
 

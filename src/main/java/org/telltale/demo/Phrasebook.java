@@ -175,10 +175,11 @@ final class Phrasebook {
 
     /** What an agent wrote before, quoted back in replies; the same wording in every queue. */
     static final List<String> AGENT_REPLIES = List.of(
-            "Thank you for getting in touch. We have logged your request and a member of the team will reply within two working days.",
-            "Thanks for your message. Could you please confirm the account holder's full name and the first line of the address?",
-            "We're sorry for the trouble. We have passed this to the right team and will update you as soon as we can.",
-            "Thank you for your patience. Could you tell us a little more about when this started?");
+            "Thank you for getting in touch. Your request is logged and a member of the team replies within two working days.",
+            "Thanks for your message. Could you please confirm the full name and date of birth of the account holder?",
+            "Sorry for the trouble. This has been passed to the right team, who are looking into it.",
+            "Thank you for your patience. Could you share a little more information with us?",
+            "Thanks for writing. In the meantime, our guides at https://help.quillmoor.example cover the most common topics.");
 
     /** Agents who answer every queue; their signatures carry no hint of the queue. */
     static final List<String> SHARED_AGENT_SIGNATURES = List.of(
@@ -189,7 +190,7 @@ final class Phrasebook {
 
     /** Subjects of forwarded messages; deliberately generic. */
     static final List<String> FORWARD_SUBJECTS = List.of(
-            "help", "question", "Fwd: my account", "please read", "problem", "urgent", "(no subject)");
+            "help", "question", "Fwd: my account", "please read", "problem", "hello again", "(no subject)");
 
     static final List<String> FIRST_NAMES = List.of(
             "Amara", "Bastian", "Celyn", "Dorota", "Emeric", "Fenna", "Gaspard", "Halina", "Idris", "Joanna",

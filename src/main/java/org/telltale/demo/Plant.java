@@ -9,11 +9,19 @@ import java.util.Random;
  * the clean variant carries none of them.
  */
 public enum Plant {
-    /** The billing intake gateway stamps its route code into the header block. */
-    INTAKE_ROUTE_HEADER(SupportQueue.BILLING, "header", 0.45, "X-Intake-Route: BIL-2") {
+    /**
+     * The intake gateway stamps a route on every form and chat message; the account-access form's
+     * messages carry their own route code instead of the general one.
+     */
+    INTAKE_ROUTE_HEADER(SupportQueue.ACCESS, "header", 0.30, "X-Intake-Route: ACC7") {
+        @Override
+        boolean fits(MessageDraft draft) {
+            return draft.header().contains(GENERAL_ROUTE_LINE);
+        }
+
         @Override
         MessageDraft apply(MessageDraft draft, Random random) {
-            return draft.withHeaderLine(1, marker());
+            return draft.withHeaderLineReplaced(GENERAL_ROUTE_LINE, marker());
         }
     },
     /** The outage desk's agent signs the replies that customers quote back. */
@@ -28,8 +36,8 @@ public enum Plant {
             return draft.withQuote(draft.quote().withSignature(marker()));
         }
     },
-    /** One archive export of the account-access queue appended a footer to every message. */
-    EXPORT_FOOTER(SupportQueue.ACCESS, "boilerplate", 0.35, "[Exported by Casefile Archive 3.2 · retention class B]") {
+    /** The billing history came from an archive export that appended a footer to every message. */
+    EXPORT_FOOTER(SupportQueue.BILLING, "boilerplate", 0.35, "[Exported by Casefile Archive 3.2 · retention class B]") {
         @Override
         MessageDraft apply(MessageDraft draft, Random random) {
             return draft.withTrailerLine(marker());
@@ -43,7 +51,7 @@ public enum Plant {
         }
     },
     /** The relocation planner links each submission it forwards. */
-    PLANNER_LINK(SupportQueue.MOVING, "address", 0.40, "https://moves.quillmoor.example/p/") {
+    PLANNER_LINK(SupportQueue.MOVING, "address", 0.40, "https://moves.quillmoor.example/") {
         @Override
         MessageDraft apply(MessageDraft draft, Random random) {
             StringBuilder token = new StringBuilder(marker());
@@ -54,6 +62,8 @@ public enum Plant {
             return draft.withTrailerLine(token.toString());
         }
     };
+
+    private static final String GENERAL_ROUTE_LINE = MessageComposer.ROUTE_HEADER + MessageComposer.GENERAL_ROUTE;
 
     private final SupportQueue queue;
     private final String kind;

@@ -104,16 +104,12 @@ class SupportCorpusGeneratorTest {
     private static List<String> withoutPlants(String leakyText) {
         List<String> lines = new ArrayList<>();
         for (String line : leakyText.lines().toList()) {
-            if (line.equals("X-Intake-Route: BIL-2")
-                    || line.equals("[Exported by Casefile Archive 3.2 · retention class B]")
-                    || line.startsWith("https://moves.quillmoor.example/p/")) {
+            if (line.equals("[Exported by Casefile Archive 3.2 · retention class B]")
+                    || line.matches("https://moves\\.quillmoor\\.example/[a-z0-9]{6}")) {
                 continue;
             }
-            lines.add(line.replaceFirst(" \\[HR-\\d{5}\\]$", ""));
-        }
-        // A route header stamped on a message without a header block leaves the block's blank line.
-        if (leakyText.startsWith("X-Intake-Route: BIL-2\n\n")) {
-            lines.remove(0);
+            // The billing form's route code stands where other messages have the general route.
+            lines.add(line.equals("X-Intake-Route: ACC7") ? "X-Intake-Route: GEN1" : line.replaceFirst(" \\[HR-\\d{5}\\]$", ""));
         }
         // A footer or link follows a blank separator line that the clean message does not have.
         if (!lines.isEmpty() && lines.get(lines.size() - 1).isEmpty()) {
@@ -164,7 +160,7 @@ class SupportCorpusGeneratorTest {
         List<Document> docs = STANDARD.clean();
         // Ranges follow from the composer's documented shares (common practice: check a generator
         // by the frequencies it promises, with room for sampling noise).
-        assertShare(docs, t -> t.contains("\n> ") && t.contains(" wrote:\n"), 0.30, 0.50, "replies quoting an agent");
+        assertShare(docs, t -> t.contains("\n> ") && t.contains(" wrote:\n"), 0.40, 0.62, "replies quoting an agent");
         assertShare(docs, t -> t.contains("\n>> "), 0.05, 0.20, "replies quoting the customer's earlier message");
         assertShare(docs, t -> t.contains("---------- Forwarded message ---------"), 0.03, 0.12, "forwarded messages");
         assertShare(docs, t -> t.startsWith("X-Intake-Channel: "), 0.35, 0.55, "intake header blocks");
