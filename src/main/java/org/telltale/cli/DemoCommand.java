@@ -9,6 +9,10 @@ import org.telltale.ExitCodes;
 import org.telltale.UsageException;
 import org.telltale.demo.CorpusFiles;
 import org.telltale.demo.DemoCorpus;
+import org.telltale.demo.DemoOutcome;
+import org.telltale.demo.DemoProgress;
+import org.telltale.demo.DemoRun;
+import org.telltale.demo.DemoSettings;
 import org.telltale.demo.Plant;
 import org.telltale.demo.SupportCorpusGenerator;
 import picocli.CommandLine.Command;
@@ -61,11 +65,24 @@ final class DemoCommand implements Callable<Integer> {
         if (size < SupportCorpusGenerator.MIN_SIZE) {
             throw new UsageException("--size must be at least " + SupportCorpusGenerator.MIN_SIZE + ": " + size);
         }
-        DemoCorpus corpus = new SupportCorpusGenerator(seed, size).generate();
         if (generate != null) {
-            return writeCorpus(corpus);
+            return writeCorpus(new SupportCorpusGenerator(seed, size).generate());
         }
-        throw new org.telltale.TelltaleException("the demo run is not wired yet; use --generate DIR");
+        return runDemo();
+    }
+
+    private int runDemo() {
+        PrintWriter err = spec.commandLine().getErr();
+        DemoProgress progress = quiet ? DemoProgress.silent() : message -> {
+            err.println(message);
+            err.flush();
+        };
+        DemoSettings settings = DemoSettings.defaults(out).withCorpus(seed, size).withForce(force);
+        DemoOutcome outcome = DemoRun.run(settings, progress);
+        PrintWriter stdout = spec.commandLine().getOut();
+        outcome.summary().forEach(stdout::println);
+        stdout.flush();
+        return ExitCodes.OK;
     }
 
     private int writeCorpus(DemoCorpus corpus) {

@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.telltale.TelltaleException;
 import org.telltale.UsageException;
+import org.telltale.audit.OutputFolder;
 
 /**
  * The demo's output folder and where each file goes in it:
@@ -21,7 +22,8 @@ import org.telltale.UsageException;
  */
 public final class DemoFolder {
     /** What an audit writes into its folder; removed before a forced rerun. */
-    static final List<String> AUDIT_FILES = List.of("report.html", "audit.json", "explanations.jsonl", "journal.jsonl");
+    static final List<String> AUDIT_FILES = List.of(OutputFolder.REPORT, OutputFolder.AUDIT, OutputFolder.EXPLANATIONS,
+            OutputFolder.JOURNAL);
 
     private final Path root;
 
@@ -47,7 +49,7 @@ public final class DemoFolder {
     }
 
     public Path report(String variant) {
-        return auditDir(variant).resolve("report.html");
+        return auditDir(variant).resolve(OutputFolder.REPORT);
     }
 
     /**
