@@ -17,7 +17,7 @@ import org.telltale.audit.Severity;
  * rewrote only the explained documents, the figures are for those and the line says so.
  *
  * @param accuracy      accuracy on the audited corpus, or {@code null} without gold labels
- * @param worst         the scrub that lowered accuracy most, if any scrub ran
+ * @param worst         the scrub that cost the most correct predictions, if any scrub ran
  * @param accuracyAfter accuracy after that scrub, on the same documents as {@code accuracy}
  *                      (corpus-wide) or on the scrubbed documents (explained scope)
  * @param findings      open findings (not suppressed by a policy)
@@ -31,7 +31,7 @@ public record Headline(Double accuracy, Scrub worst, Double accuracyAfter, int f
         Double accuracy = audit.summary().accuracy();
         Optional<Scrub> worst = audit.scrub().stream()
                 .filter(s -> s.accuracyBefore() != null && s.accuracyAfter() != null && s.documents() > 0)
-                .max((a, b) -> Double.compare(drop(a), drop(b)));
+                .max((a, b) -> Double.compare(a.documents() * drop(a), b.documents() * drop(b)));
         if (worst.isEmpty()) {
             return new Headline(accuracy, null, null, open.size(), high);
         }
@@ -75,6 +75,7 @@ public record Headline(Double accuracy, Scrub worst, Double accuracyAfter, int f
         return "corpus".equals(s.scope());
     }
 
+    /** Accuracy lost on the rewritten documents; times their number, the correct predictions lost. */
     private static double drop(Scrub s) {
         return s.accuracyBefore() - s.accuracyAfter();
     }

@@ -179,7 +179,7 @@ final class Phrasebook {
             "Thanks for your message. Could you please confirm the full name and date of birth of the account holder?",
             "Sorry for the trouble. This has been passed to the right team, who are looking into it.",
             "Thank you for your patience. Could you share a little more information with us?",
-            "Thanks for writing. In the meantime, our guides at https://help.quillmoor.example cover the most common topics.");
+            "Thanks for your note. In the meantime, our guides at https://help.quillmoor.example cover the most common topics.");
 
     /** Agents who answer every queue; their signatures carry no hint of the queue. */
     static final List<String> SHARED_AGENT_SIGNATURES = List.of(

@@ -30,6 +30,18 @@ class HeadlineTest {
     }
 
     @Test
+    void theScrubThatCostsMostCorrectPredictionsLeadsNotTheSteepestOnAFewMessages() {
+        // 10 messages losing half their accuracy cost 5 correct predictions; 200 losing 0.1 cost 20.
+        AuditResult audit = audit(600, 0.9,
+                List.of(scrub(ArtefactKind.IDENTIFIER, "terms", "corpus", 10, 1.0, 0.5),
+                        scrub(ArtefactKind.BOILERPLATE, "lines", "corpus", 200, 0.9, 0.8)),
+                List.of());
+        Headline h = Headline.of(audit);
+        assertEquals(ArtefactKind.BOILERPLATE, h.worst().kind());
+        assertEquals((540 - 180 + 160) / 600.0, h.accuracyAfter(), 1e-12);
+    }
+
+    @Test
     void explainedScopeSpeaksOfTheScrubbedMessagesOnly() {
         AuditResult audit = audit(500, 0.96, List.of(scrub(ArtefactKind.IDENTIFIER, "terms", "explained", 40, 1.0, 0.75)),
                 List.of(finding("hr", Severity.HIGH, false)));
