@@ -193,4 +193,30 @@ class ExplainerTest {
             assertTrue(seen.contains("refund"), "a left-out unit stays in every probe: " + seen);
         }
     }
+
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.EnumSource(value = Selection.class, names = {"FORWARD", "LARS", "LARGEST"})
+    void everySelectionFindsTheWordsALinearModelUses(Selection selection) {
+        // Common practice: with the truth in the model family, each selection rule recovers its support.
+        FunctionClassifier model = new FunctionClassifier(ExplainerTest::linear);
+        ExplainSettings settings = ExplainSettings.defaults().withWords(5).withSelect(selection).withProbes(1500);
+        Explanation e = new Explainer(model, settings).explain(Document.unlabelled("t9", TEXT), "yes");
+        assertEquals(TRUE_WEIGHTS.keySet(),
+                e.terms().stream().map(Explanation.TermWeight::term).collect(java.util.stream.Collectors.toSet()));
+        assertEquals("lost", e.terms().get(0).term());
+    }
+
+    @Test
+    void sampledShapleyFitsKeepTheirTwoConstraintsExactly() {
+        // Lundberg & Lee 2017, Theorem 2: g(empty) = f(empty) and g(x) = f(x), whatever the sample.
+        FunctionClassifier model = new FunctionClassifier(words -> 1 / (1 + Math.exp(-(words.contains("lost") ? 1.5 : 0)
+                - (words.contains("never") && words.contains("refund") ? 0.8 : 0) + 0.4)));
+        ExplainSettings settings = ExplainSettings.defaults().withWeighting(Weighting.SHAPLEY).withProbes(400);
+        Explanation e = new Explainer(model, settings).explain(Document.unlabelled("t10", TEXT), "yes");
+        assertFalse(e.method().exact());
+        assertEquals(model.yes(""), e.fit().intercept(), 1e-12);
+        assertEquals(model.yes(TEXT), e.fit().prediction(), 1e-12);
+        assertEquals(model.yes(TEXT) - model.yes(""), e.terms().stream().mapToDouble(Explanation.TermWeight::weight).sum(), 1e-12);
+        assertEquals("lost", e.terms().get(0).term());
+    }
 }
