@@ -12,14 +12,20 @@ import org.telltale.audit.AuditResult.Finding;
  * Decides which (term, label) pairs are findings: the explanations weigh the term towards the
  * label (mean weight above zero) with an importance of at least {@value #IMPORTANCE_SHARE} of the
  * label's most important term; the corpus associates the term with the label beyond the
- * Bonferroni-corrected threshold; and its occurrences sit mostly outside content — or the policy
- * marks it {@code artefact}. Severity and confirmation come later, from the scrub test.
+ * Bonferroni-corrected threshold and by at least {@value #MIN_PMI} bits of PMI; and its
+ * occurrences sit mostly outside content — or the policy marks it {@code artefact}. Severity and confirmation come later, from the scrub test.
  */
 final class FindingRules {
     /** A term must reach this share of its label's top importance to count as important. */
     static final double IMPORTANCE_SHARE = 0.1;
     /** Fewer documents than this give no usable normal approximation; such pairs are not tested. */
     static final int MIN_SUPPORT = 5;
+    /**
+     * The least PMI, in bits, of a finding: p̂(label | term) at least 2^0.5 ≈ 1.41 times the prior.
+     * On a large corpus a tiny lean passes any significance test; a function word that sits in
+     * repeated template lines slightly more often in one queue is not an artefact worth reporting.
+     */
+    static final double MIN_PMI = 0.5;
 
     /** A finding before the scrub test has confirmed it or not. */
     record Candidate(TermWeights.Entry entry, ArtefactKind kind, long support, double z, double pmi,
@@ -84,10 +90,12 @@ final class FindingRules {
             ArtefactKind kind = corpus.kind(e.term());
             Optional<Policy.Rule> rule = policy.match(e.term());
             boolean marked = rule.map(r -> r.status() == Policy.Status.ARTEFACT).orElse(false);
-            if ((important && significant && kind != ArtefactKind.CONTENT) || marked) {
+            double pmi = Association.pmi(pHat, p0);
+            boolean strong = significant && pmi >= MIN_PMI;
+            if ((important && strong && kind != ArtefactKind.CONTENT) || marked) {
                 Map<String, Double> shares = new LinkedHashMap<>();
                 corpus.kindShares(e.term()).forEach((kk, v) -> shares.put(kk.key(), v));
-                candidates.add(new Candidate(e, kind, n, z, Association.pmi(pHat, p0), pHat, df, shares,
+                candidates.add(new Candidate(e, kind, n, z, pmi, pHat, df, shares,
                         significant, rule));
             }
         }
