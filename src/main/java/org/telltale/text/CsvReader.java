@@ -62,10 +62,14 @@ final class CsvReader extends CorpusReader {
             throw new TelltaleException(file + ":1: cannot read the CSV header: " + e.getMessage(), e);
         }
         Map<String, Integer> header = parser.getHeaderMap();
-        if (header == null || !header.containsKey(settings.textField())) {
+        if (header == null || header.isEmpty()) {
+            parser.close();
+            throw new TelltaleException(file + ": empty; a CSV corpus starts with a header row naming its columns");
+        }
+        if (!header.containsKey(settings.textField())) {
             parser.close();
             throw new TelltaleException(file + ": the header has no column '" + settings.textField() + "' (columns: "
-                    + (header == null ? "none" : String.join(", ", header.keySet())) + "); choose one with --text-field");
+                    + String.join(", ", header.keySet()) + "); choose one with --text-field");
         }
         this.columns = header.size();
         this.textColumn = header.get(settings.textField());

@@ -19,8 +19,8 @@ import org.telltale.TelltaleException;
  * <p>Walked lazily in name order (by UTF-16 code unit, whatever the locale). A symbolic link to a
  * file is followed only when its real target lies inside the root; links leading outside, broken
  * links and links to folders (which could only read documents twice or loop) are passed over and
- * counted, as are binary files (a NUL byte), non-{@code .txt} files and files directly in the
- * root.
+ * counted, as are binary files (a NUL byte), non-{@code .txt} files, files directly in the
+ * root, and hidden files and folders (name starting with a dot, such as {@code .git}).
  */
 final class FolderReader extends CorpusReader {
     private final Path root;
@@ -44,6 +44,9 @@ final class FolderReader extends CorpusReader {
         while (!pending.isEmpty()) {
             Path entry = pending.pop();
             String relative = relativeId(entry);
+            if (entry.getFileName().toString().startsWith(".")) {
+                throw new BadRecord(SkipReason.HIDDEN, entry + ": hidden (its name starts with a dot), not read");
+            }
             Path real = entry;
             if (Files.isSymbolicLink(entry)) {
                 try {

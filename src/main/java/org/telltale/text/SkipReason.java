@@ -19,7 +19,8 @@ public enum SkipReason {
     OUTSIDE_LABEL_FOLDER("outside a label folder", false),
     LINK_OUTSIDE("link leading outside the corpus", false),
     BROKEN_LINK("broken link", false),
-    LINKED_FOLDER("link to a folder", false);
+    LINKED_FOLDER("link to a folder", false),
+    HIDDEN("hidden file or folder", false);
 
     private final String phrase;
     private final boolean bad;

@@ -61,4 +61,11 @@ class CsvReaderTest {
                 () -> Corpora.readAll(file, CorpusSettings.DEFAULTS.withSkipBad(true)));
         assertTrue(e.getMessage().startsWith(file + ":3: broken CSV quoting"), e.getMessage());
     }
+
+    @Test
+    void anEmptyFileIsRefusedAsHavingNoHeader() {
+        Path file = CorpusFiles.write(dir, "empty.csv", "");
+        TelltaleException e = assertThrows(TelltaleException.class, () -> Corpora.open(file, CorpusSettings.DEFAULTS));
+        assertEquals(file + ": empty; a CSV corpus starts with a header row naming its columns", e.getMessage());
+    }
 }
