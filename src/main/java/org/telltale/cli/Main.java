@@ -1,6 +1,9 @@
 package org.telltale.cli;
 
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
 import org.telltale.ExitCodes;
 import picocli.CommandLine;
 
@@ -15,17 +18,31 @@ public final class Main {
 
     /** Runs one command line and returns its exit code; used by tests without exiting the JVM. */
     public static int run(String... args) {
-        return commandLine().execute(args);
+        CommandLine cli = commandLine();
+        try {
+            return cli.execute(args);
+        } finally {
+            cli.getOut().flush();
+            cli.getErr().flush();
+        }
     }
 
     /** The full command tree, configured with Telltale's error handling and exit codes. */
     public static CommandLine commandLine() {
         CommandLine cli = new CommandLine(new TelltaleCommand());
+        // Document text is printed as UTF-8 whatever the platform's default charset, so a POSIX
+        // locale does not turn every non-ASCII character into '?'.
+        cli.setOut(utf8(System.out));
+        cli.setErr(utf8(System.err));
         cli.setExecutionExceptionHandler(new ErrorHandler());
         cli.setParameterExceptionHandler(new UsageErrorHandler());
         cli.setExitCodeExceptionMapper(e -> ExitCodes.ERROR);
         cli.setCaseInsensitiveEnumValuesAllowed(true);
         return cli;
+    }
+
+    private static PrintWriter utf8(OutputStream stream) {
+        return new PrintWriter(new OutputStreamWriter(stream, StandardCharsets.UTF_8), true);
     }
 
     /** Usage errors: one line naming the problem, a hint to --help, exit 2. */
