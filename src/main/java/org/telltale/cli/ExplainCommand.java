@@ -20,6 +20,7 @@ import org.telltale.explain.Explanation;
 import org.telltale.explain.Selection;
 import org.telltale.explain.Weighting;
 import org.telltale.model.TextClassifier;
+import org.telltale.report.html.HtmlReports;
 import org.telltale.report.json.ExplanationsJson;
 import org.telltale.report.terminal.ExplanationTable;
 import org.telltale.report.terminal.MarkedLine;
@@ -73,9 +74,16 @@ final class ExplainCommand implements Callable<Integer> {
     String json;
     @Option(names = "--no-color", description = "No ANSI colour, even on a terminal.")
     boolean noColor;
+    @Option(names = "--html", paramLabel = "FILE", description = "Also write a self-contained HTML report (see docs/reports.md).")
+    Path html;
+    @Option(names = "--force", description = "Replace an existing --html FILE.")
+    boolean force;
 
     @Override
     public Integer call() throws IOException {
+        if (html != null) {
+            HtmlReports.refuseToReplace(html, force);
+        }
         List<Document> documents = documents();
         ExplainSettings settings = settings();
         PrintWriter out = spec.commandLine().getOut();
@@ -111,6 +119,9 @@ final class ExplainCommand implements Callable<Integer> {
             } catch (IOException e) {
                 throw new TelltaleException(json + ": cannot write: " + e.getMessage(), e);
             }
+        }
+        if (html != null) {
+            HtmlReports.write(HtmlReports.explanations(explanations), html, force);
         }
         return ExitCodes.OK;
     }

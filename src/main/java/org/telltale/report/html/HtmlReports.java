@@ -66,9 +66,7 @@ public final class HtmlReports {
      * file appears whole or not at all (written beside it, then moved).
      */
     public static void write(String html, Path out, boolean force) {
-        if (Files.exists(out) && !force) {
-            throw new TelltaleException(out + ": file exists; pass --force to replace it");
-        }
+        refuseToReplace(out, force);
         try {
             Path parent = out.toAbsolutePath().getParent();
             Files.createDirectories(parent);
@@ -81,6 +79,16 @@ public final class HtmlReports {
             }
         } catch (IOException e) {
             throw new TelltaleException(out + ": cannot write report: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Fails early, before any work, when {@code out} exists and may not be replaced; {@link #write}
+     * checks again.
+     */
+    public static void refuseToReplace(Path out, boolean force) {
+        if (Files.exists(out) && !force) {
+            throw new TelltaleException(out + ": file exists; pass --force to replace it");
         }
     }
 
