@@ -109,7 +109,7 @@ class AuditReportBrowserTest {
         WebElement link = chromium.driver.findElement(By.cssSelector("#finding-0 a.tt-ctx-doc"));
         String id = link.getText();
         link.click();
-        WebElement view = chromium.driver.findElement(By.cssSelector("#tt-viewer article.tt-doc"));
+        WebElement view = chromium.await(By.cssSelector("#tt-viewer article.tt-doc"));
         assertEquals(id, view.findElement(By.cssSelector(".tt-docid")).getText());
         Explanation e = audit.explanations().stream().filter(x -> x.id().equals(id)).findFirst().orElseThrow();
         long spans = e.terms().stream().mapToLong(t -> t.spans().size()).sum();
@@ -154,6 +154,7 @@ class AuditReportBrowserTest {
         HtmlReports.write(HtmlReports.audit(withHostile, explanations), hostileFile, true);
         chromium.open(hostileFile);
         chromium.driver.navigate().to(hostileFile.toUri() + "#doc-" + (explanations.size() - 1));
+        chromium.await(By.cssSelector("#tt-viewer article.tt-doc"));
         assertEquals(2, chromium.driver.findElements(By.cssSelector(".tt-doc .tt-docid")).stream()
                 .filter(el -> el.getText().equals(HostileTexts.HOSTILE_ID)).count(), "the pick and the opened view");
         assertNull(chromium.js("return window.telltalePwned === undefined ? null : window.telltalePwned;"));

@@ -78,6 +78,15 @@ final class HeadlessChromium implements AutoCloseable {
         return png;
     }
 
+    /**
+     * The element once it is in the page: views open on a hashchange event, which the browser
+     * may deliver after the click returns. Waits at most 10 s.
+     */
+    org.openqa.selenium.WebElement await(org.openqa.selenium.By locator) {
+        return new org.openqa.selenium.support.ui.WebDriverWait(driver, Duration.ofSeconds(10))
+                .until(org.openqa.selenium.support.ui.ExpectedConditions.presenceOfElementLocated(locator));
+    }
+
     Object js(String script, Object... args) {
         return driver.executeScript(script, args);
     }
