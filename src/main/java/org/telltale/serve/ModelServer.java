@@ -70,7 +70,7 @@ public final class ModelServer implements AutoCloseable {
      * @throws TelltaleException when the address cannot be bound
      */
     public static ModelServer start(TextClassifier model, List<String> labels, ServerSettings settings, PrintStream log) {
-        SlowClientLimits.apply(settings.requestTime());
+        ServerTuning.apply(settings.requestTime());
         InetSocketAddress address = new InetSocketAddress(settings.host(), settings.port());
         if (address.isUnresolved()) {
             throw new TelltaleException("--host " + settings.host() + ": unknown host");
