@@ -12,7 +12,7 @@ import net.jqwik.api.Provide;
  * Arbitrary bytes, and JSON-looking mutations of good answers, never crash the answer parsers:
  * each either reads a result or reports a {@link MalformedResponse} (common practice: parser fuzzing).
  */
-class ProtocolParserProperties {
+class ProtocolParserPropertyTest {
     private static final List<String> GOOD = List.of(
             "{\"labels\":[\"a\",\"b\"],\"scores\":[[0.1,0.9],[0.5,0.5]]}",
             "{\"outputs\":[{\"name\":\"s\",\"datatype\":\"FP32\",\"shape\":[2,2],\"data\":[0.1,0.9,0.5,0.5]}]}",

@@ -13,7 +13,7 @@ import org.telltale.connect.SupportQueueModel;
 import org.telltale.model.BuiltinModel;
 
 /** Arbitrary request bodies never crash the server's parsers: a result or a 400 (common practice: parser fuzzing). */
-class RequestParserProperties {
+class RequestParserPropertyTest {
     private static final BuiltinModel MODEL = SupportQueueModel.train();
 
     private static void parseAll(byte[] body) {
