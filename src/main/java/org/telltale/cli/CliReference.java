@@ -61,7 +61,7 @@ public final class CliReference {
         for (OptionSpec o : options) {
             String names = String.join(", ", o.names());
             String label = o.typeInfo().isBoolean() ? "" : " " + o.paramLabel();
-            String def = o.defaultValue() == null ? "" : "`" + o.defaultValue() + "`";
+            String def = o.defaultValue() == null ? "" : o.defaultValue().isEmpty() ? "(empty)" : "`" + o.defaultValue() + "`";
             md.append("| `").append(names).append(label).append("` | ")
                     .append(cell(String.join(" ", o.description()))).append(" | ").append(cell(def)).append(" |\n");
         }
