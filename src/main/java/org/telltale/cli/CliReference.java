@@ -5,6 +5,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import picocli.CommandLine;
 import picocli.CommandLine.Model.CommandSpec;
@@ -25,8 +26,22 @@ public final class CliReference {
         Files.writeString(out, markdown(), StandardCharsets.UTF_8);
     }
 
-    /** The whole reference as Markdown. */
-    public static String markdown() {
+    /**
+     * The whole reference as Markdown. picocli sorts synopsis options with the default locale's
+     * collation, so the default is pinned to {@link Locale#ROOT} while the text is built: the file
+     * must not depend on who generated it.
+     */
+    public static synchronized String markdown() {
+        Locale before = Locale.getDefault();
+        Locale.setDefault(Locale.ROOT);
+        try {
+            return build();
+        } finally {
+            Locale.setDefault(before);
+        }
+    }
+
+    private static String build() {
         CommandLine root = Main.commandLine();
         StringBuilder md = new StringBuilder();
         md.append("# Command-line reference\n\n")
