@@ -11,8 +11,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
+import org.telltale.JarRun;
+import org.telltale.JarRun.Run;
 import org.junit.jupiter.api.io.TempDir;
 
 /** Runs the built jar: explain against a built-in model file and through an {@code exec:} subprocess. */
@@ -20,21 +21,8 @@ class ExplainIT {
     @TempDir
     Path dir;
 
-    private record Run(int code, String out, String err) {
-    }
-
     private Run telltale(String... args) throws IOException, InterruptedException {
-        List<String> command = new ArrayList<>(List.of("java", "-jar", System.getProperty("telltale.jar")));
-        command.addAll(List.of(args));
-        Path out = dir.resolve("stdout.txt");
-        Path err = dir.resolve("stderr.txt");
-        Process p = new ProcessBuilder(command).redirectOutput(out.toFile()).redirectError(err.toFile()).start();
-        if (!p.waitFor(120, TimeUnit.SECONDS)) {
-            p.destroyForcibly();
-            throw new AssertionError("telltale " + String.join(" ", args) + " did not finish in 120 s");
-        }
-        return new Run(p.exitValue(), Files.readString(out, StandardCharsets.UTF_8),
-                Files.readString(err, StandardCharsets.UTF_8));
+        return JarRun.telltale(dir, args);
     }
 
     private static final String TEXT = "Hello, the garden hose I ordered arrived with a split nozzle. "
