@@ -1,5 +1,6 @@
 package org.telltale.connect;
 
+import org.telltale.model.Softmax;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;

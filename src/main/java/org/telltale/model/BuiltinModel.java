@@ -75,7 +75,7 @@ public abstract sealed class BuiltinModel implements TextClassifier permits Naiv
 
     /** The probability of each label for {@code text}. */
     public double[] probabilities(String text) {
-        return softmax(logScores(text));
+        return Softmax.of(logScores(text));
     }
 
     @Override
@@ -105,22 +105,4 @@ public abstract sealed class BuiltinModel implements TextClassifier permits Naiv
 
     /** Scores of each label from raw counts of the known features. */
     abstract double[] linearScores(SparseCounts counts);
-
-    /** Softmax by the log-sum-exp shift, so large scores do not overflow (common practice). */
-    static double[] softmax(double[] z) {
-        double max = Double.NEGATIVE_INFINITY;
-        for (double v : z) {
-            max = Math.max(max, v);
-        }
-        double[] p = new double[z.length];
-        double sum = 0;
-        for (int j = 0; j < z.length; j++) {
-            p[j] = Math.exp(z[j] - max);
-            sum += p[j];
-        }
-        for (int j = 0; j < z.length; j++) {
-            p[j] /= sum;
-        }
-        return p;
-    }
 }

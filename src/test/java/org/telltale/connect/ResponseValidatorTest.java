@@ -1,5 +1,6 @@
 package org.telltale.connect;
 
+import org.telltale.model.Softmax;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -66,7 +66,7 @@ class LogisticReferenceTest {
                 }
             }
             for (int i = 0; i < rows.size(); i++) {
-                double[] p = BuiltinModel.softmax(model.linearScores(rows.get(i)));
+                double[] p = Softmax.of(model.linearScores(rows.get(i)));
                 for (int c = 0; c < labels.size(); c++) {
                     assertEquals(fit.get("probabilities").get(i).get(c).asDouble(), p[c], 1e-7,
                             "probability of " + labels.get(c) + " for row " + (i + 1));

@@ -1,15 +1,16 @@
-package org.telltale.connect;
+package org.telltale.model;
 
 /**
  * Turns a row of logits into probabilities: {@code exp(x_i - max) / Σ exp(x_j - max)}. Subtracting
  * the maximum first keeps large logits from overflowing (common practice; Goodfellow, Bengio and
- * Courville, Deep Learning, 2016, §4.1).
+ * Courville, Deep Learning, 2016, §4.1). Used by the built-in models and by connectors whose
+ * models answer logits.
  */
-final class Softmax {
+public final class Softmax {
     private Softmax() {
     }
 
-    static double[] of(double[] logits) {
+    public static double[] of(double[] logits) {
         double max = Double.NEGATIVE_INFINITY;
         for (double v : logits) {
             max = Math.max(max, v);
