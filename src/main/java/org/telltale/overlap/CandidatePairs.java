@@ -35,7 +35,7 @@ final class CandidatePairs {
         for (int band = 0; band < b; band++) {
             for (int p = 0; p < m; p++) {
                 int i = members[p];
-                packed[p] = (table.bandKeys[i * b + band] & ~indexMask) | i;
+                packed[p] = PairRules.bucketKey(table.bandKeys[i * b + band], n) | i;
             }
             Arrays.parallelSort(packed, 0, m);
             int start = 0;

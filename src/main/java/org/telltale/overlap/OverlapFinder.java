@@ -54,7 +54,8 @@ public final class OverlapFinder {
             BitSet keepText = settings.keepTexts() ? assembler.groupedDocuments() : new BitSet();
             VerificationPass.Verified verified = new VerificationPass(settings, pool)
                     .run(train, test, table, candidates, keepText);
-            OverlapResult result = assembler.assemble(train.name(), test.name(), settings, verified, candidates.length);
+            OverlapResult result = assembler.assemble(train.name(), test.name(), settings, verified,
+                    PairAssembler.Counts.of(table, candidates.length));
             progress.accept(String.format(Locale.ROOT, "second reading and verification: %,d near pairs of distinct texts (%s)",
                     verified.pairs().length, seconds(start)));
             return result;

@@ -45,8 +45,17 @@ final class PairAssembler {
         return grouped;
     }
 
+    /** The corpus-wide counts of the summary: the table may hold only the documents in pairs. */
+    record Counts(long train, long test, long trainEmpty, long testEmpty, long candidates) {
+        static Counts of(DocumentTable table, long candidates) {
+            long trainEmpty = table.empty.get(0, Math.max(0, table.trainCount)).cardinality();
+            return new Counts(table.trainCount, table.size() - table.trainCount, trainEmpty,
+                    table.empty.cardinality() - trainEmpty, candidates);
+        }
+    }
+
     OverlapResult assemble(String trainName, String testName, OverlapSettings settings, VerificationPass.Verified verified,
-                           long candidates) {
+                           Counts counts) {
         List<Raw> raws = new ArrayList<>();
         for (int r = 0; r < table.size(); r++) {
             if (rep[r] != r) {
@@ -105,12 +114,10 @@ final class PairAssembler {
                 keepText(p.y, verified.texts(), trainTexts, testTexts);
             }
         }
-        long trainEmpty = table.empty.get(0, Math.max(0, trainCount)).cardinality();
-        long testEmpty = table.empty.cardinality() - trainEmpty;
-        OverlapSummary summary = new OverlapSummary(trainCount, testCount, trainEmpty, testEmpty,
+        OverlapSummary summary = new OverlapSummary(counts.train(), counts.test(), counts.trainEmpty(), counts.testEmpty(),
                 byKind[PairKind.TRAIN_TEST.ordinal()], exactCross, byKind[PairKind.WITHIN_TRAIN.ordinal()],
                 byKind[PairKind.WITHIN_TEST.ordinal()], seen.cardinality(), seenExact.cardinality(),
-                conflicting.cardinality(), trainSeen.cardinality(), candidates);
+                conflicting.cardinality(), trainSeen.cardinality(), counts.candidates());
         return new OverlapResult(trainName, testName, settings, pairs, summary,
                 trainTexts, testTexts, null);
     }

@@ -89,24 +89,17 @@ final class SignaturePass {
         long[] lo = new long[m];
         long[] keys = new long[m * b];
         BitSet empty = new BitSet(m);
-        long[] sig = new long[hasher.length()];
+        DocumentSigner signer = new DocumentSigner(shingler, hasher, banding);
+        long[] key = new long[2];
         for (int i = 0; i < m; i++) {
             Document doc = docs.get(i);
             ids[i] = doc.id();
             labels[i] = doc.label();
-            String norm = TextNormalizer.forShingles(doc.text());
-            long[] key = Hash64.exactKey(norm);
+            if (!signer.sign(doc.text(), key, keys, i * b)) {
+                empty.set(i);
+            }
             hi[i] = key[0];
             lo[i] = key[1];
-            long[] shingles = shingler.shinglesOfNormalised(norm);
-            if (shingles.length == 0) {
-                empty.set(i);
-                continue;
-            }
-            hasher.signature(shingles, sig);
-            for (int j = 0; j < b; j++) {
-                keys[i * b + j] = banding.bandKey(sig, j);
-            }
         }
         return new Batch(ids, labels, hi, lo, keys, empty);
     }

@@ -101,8 +101,7 @@ final class VerificationPass {
         int c = 0;
         for (Future<double[]> part : parts) {
             for (double s : BatchRunner.await(part)) {
-                // A tiny tolerance so that 4/5 read back as 0.8 is not lost to rounding.
-                if (s >= threshold - 1e-12) {
+                if (PairRules.isNear(s, threshold)) {
                     kept.add(candidates[c]);
                     keptSims.add(s);
                 }
