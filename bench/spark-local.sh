@@ -3,8 +3,10 @@
 # `mvn -q -Pspark -DskipTests package` leaves in target/:
 #   bench/spark-local.sh SparkOverlap --master 'local[2]' --train a.jsonl --test b.jsonl
 #   bench/spark-local.sh SparkAudit --master 'local[2]' --corpus c.jsonl --model m.json --out out/
-# JAVA_OPTS adds JVM options (e.g. -Xmx4g, or -Dspark.* settings, which Spark reads as its
-# configuration). The module flags are those Spark 4.2.0's own launcher passes
+# The first argument may also be a fully qualified class name. JAVA_OPTS adds JVM options (e.g.
+# -Xmx4g, or -Dspark.* settings, which Spark reads as its configuration); EXTRA_CLASSPATH adds
+# class path entries (e.g. hadoop-aws and its SDK for s3a:// paths). Spark logs warnings only
+# (bench/spark-log4j2.properties). The module flags are those Spark 4.2.0's own launcher passes
 # (org.apache.spark.launcher.JavaModuleOptions), less the two that only Java 23 and later know;
 # without the --add-opens Spark fails on Java 17 with an IllegalAccessError or InaccessibleObjectException.
 set -euo pipefail
@@ -16,6 +18,7 @@ classpath="$here/target/spark-classpath.txt"
 main="$1"; shift
 case "$main" in
   SparkAudit|SparkOverlap) main="org.telltale.spark.$main" ;;
+  *.*) ;;
   *) echo "spark-local.sh: unknown front '$main' (expected SparkAudit or SparkOverlap)" >&2; exit 2 ;;
 esac
 opens=(
@@ -39,4 +42,5 @@ opens=(
   -Dio.netty.tryReflectionSetAccessible=true
 )
 # shellcheck disable=SC2086
-exec java "${opens[@]}" -Dfile.encoding=UTF-8 ${JAVA_OPTS:-} -cp "$jar:$(cat "$classpath")" "$main" "$@"
+exec java "${opens[@]}" -Dfile.encoding=UTF-8 -Dlog4j2.configurationFile="$here/bench/spark-log4j2.properties" \
+  ${JAVA_OPTS:-} -cp "$jar:$(cat "$classpath")${EXTRA_CLASSPATH:+:$EXTRA_CLASSPATH}" "$main" "$@"

@@ -11,8 +11,8 @@ import java.util.Random;
  * drifts from the original: word edits, reply quoting, reordered sentences, re-casing, re-wrapping.
  * Seeded; made-up words keep unrelated tickets unrelated.
  */
-final class SupportTickets {
-    static final String[] LABELS = {"billing", "booking", "lost-property", "accessibility"};
+public final class SupportTickets {
+    public static final String[] LABELS = {"billing", "booking", "lost-property", "accessibility"};
     private static final String[] COMMON = {"the", "my", "to", "and", "is", "for", "on", "we", "a", "it",
         "ferry", "ticket", "crossing", "harbourline", "please", "refund", "cabin", "port"};
     private static final String[] SYLLABLES = {"ka", "lo", "mer", "ti", "sun", "dra", "vel", "po", "ris", "an",
@@ -21,7 +21,7 @@ final class SupportTickets {
     private final Random random;
     private final List<String> lexicon = new ArrayList<>();
 
-    SupportTickets(long seed) {
+    public SupportTickets(long seed) {
         random = new Random(seed);
         for (int i = 0; i < 4000; i++) {
             StringBuilder w = new StringBuilder();
@@ -34,7 +34,7 @@ final class SupportTickets {
     }
 
     /** A new ticket: 6–10 sentences of 8–14 words, in paragraphs of two or three sentences. */
-    String ticket() {
+    public String ticket() {
         List<String> sentences = new ArrayList<>();
         int n = 6 + random.nextInt(5);
         for (int s = 0; s < n; s++) {
@@ -43,7 +43,7 @@ final class SupportTickets {
         return join(sentences);
     }
 
-    String label() {
+    public String label() {
         return LABELS[random.nextInt(LABELS.length)];
     }
 
@@ -83,7 +83,7 @@ final class SupportTickets {
     }
 
     /** One word replaced by another. */
-    String wordEdit(String ticket) {
+    public String wordEdit(String ticket) {
         String[] words = ticket.split(" ", -1);
         int at = random.nextInt(words.length);
         String w = words[at];
@@ -131,7 +131,7 @@ final class SupportTickets {
     }
 
     /** One of the drifts above, or two of them, chosen at random; the name says which. */
-    String[] drift(String ticket) {
+    public String[] drift(String ticket) {
         return switch (random.nextInt(7)) {
             case 0 -> new String[] {"word edit", wordEdit(ticket)};
             case 1 -> new String[] {"quoted", quoted(ticket, random.nextBoolean())};
