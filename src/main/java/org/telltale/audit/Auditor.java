@@ -12,6 +12,7 @@ import java.util.Set;
 import java.util.TreeSet;
 import java.util.function.Supplier;
 import org.apache.lucene.analysis.Analyzer;
+import org.telltale.OutOfResources;
 import org.telltale.TelltaleException;
 import org.telltale.audit.AuditResult.Finding;
 import org.telltale.audit.AuditResult.Scrub;
@@ -141,7 +142,8 @@ public final class Auditor {
             }
         }
         Map<String, Map<String, ScrubTest.Effect>> effects = new HashMap<>();
-        groups.forEach((label, group) -> effects.put(label, scrubTest.group(label, group, explained)));
+        groups.forEach((label, group) -> effects.put(label, guarded("the explained documents while scrubbing terms of " + label,
+                () -> scrubTest.group(label, group, explained))));
         List<Finding> findings = new ArrayList<>();
         for (FindingRules.Candidate c : rules.candidates()) {
             ScrubTest.Effect effect = effects.getOrDefault(c.label(), Map.of()).getOrDefault(c.term(), ScrubTest.Effect.NONE);
@@ -231,7 +233,8 @@ public final class Auditor {
             labels = done.labels();
             predicted = done.predicted();
         } else {
-            ScoreMatrix scores = classifier.score(batch.stream().map(Document::text).toList(), ids);
+            ScoreMatrix scores = guarded("documents '" + ids.get(0) + "' to '"
+                    + ids.get(ids.size() - 1) + "' while scoring", () -> classifier.score(batch.stream().map(Document::text).toList(), ids));
             if (scores.size() != batch.size()) {
                 throw new TelltaleException("the model answered " + scores.size() + " rows for a batch of "
                         + batch.size() + " (documents " + ids.get(0) + " to " + ids.get(ids.size() - 1) + ")");
@@ -256,7 +259,7 @@ public final class Auditor {
             s.documents++;
             s.predicted[label]++;
             s.byPosition.add(label);
-            s.repeats.add(d.text());
+            guarded("document '" + d.id() + "' while counting lines", () -> s.repeats.add(d.text()));
             if (d.label() != null) {
                 s.labelled++;
                 if (d.label().equals(predicted.get(i))) {
@@ -297,7 +300,8 @@ public final class Auditor {
             }
             String line = journal.explained(id);
             if (line == null) {
-                line = codec.toLine(explainer.explain(d));
+                line = guarded("document '" + id + "' while explaining",
+                        () -> codec.toLine(explainer.explain(d)));
                 journal.appendExplained(id, line, newRetries());
             }
             // Always the journaled form: a resumed run and an uninterrupted one see the same numbers.
@@ -319,7 +323,8 @@ public final class Auditor {
             while (reader.hasNext()) {
                 Document d = reader.next();
                 String basis = gold ? d.label() : labels.get(s.byPosition.get(position));
-                terms.add(d.text(), basis);
+                guarded("document '" + d.id() + "' while counting terms",
+                        () -> terms.add(d.text(), basis));
                 position++;
                 if (position % 256 == 0) {
                     progress.advance(256);
@@ -374,14 +379,33 @@ public final class Auditor {
             while (reader.hasNext()) {
                 chunk.add(reader.next());
                 if (chunk.size() == settings.batch()) {
-                    sum = sum.plus(scrubTest.kindUnscored(kind, terms, chunk));
+                    sum = sum.plus(scrubChunk(kind, terms, scrubTest, chunk));
                     chunk.clear();
                 }
             }
             if (!chunk.isEmpty()) {
-                sum = sum.plus(scrubTest.kindUnscored(kind, terms, chunk));
+                sum = sum.plus(scrubChunk(kind, terms, scrubTest, chunk));
             }
         }
         return sum;
     }
+
+    private static ScrubTest.Effect scrubChunk(ArtefactKind kind, Set<String> terms, ScrubTest scrubTest,
+            List<Document> chunk) {
+        return guarded("documents '" + chunk.get(0).id() + "' to '"
+                + chunk.get(chunk.size() - 1).id() + "' while scrubbing " + kind.key(),
+                () -> scrubTest.kindUnscored(kind, terms, chunk));
+    }
+
+    /** Runs work on {@code place}; if the JVM runs out of stack or memory, the error names the place and the way on. */
+    private static <T> T guarded(String place, Supplier<T> work) {
+        return OutOfResources.naming(place, RESUME, work);
+    }
+
+    private static void guarded(String place, Runnable work) {
+        OutOfResources.naming(place, RESUME, work);
+    }
+
+    /** Journal lines are forced to disk as work finishes, so a run that failed can always be resumed. */
+    private static final String RESUME = "the journal keeps the finished work: rerun with --resume to continue";
 }

@@ -3,8 +3,8 @@ package org.telltale.audit;
 import java.util.Arrays;
 import java.util.List;
 import java.util.function.Predicate;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
+import com.google.re2j.Matcher;
+import com.google.re2j.Pattern;
 import org.telltale.text.Span;
 
 /**
@@ -15,34 +15,63 @@ import org.telltale.text.Span;
  * <p>Immutable once built.
  */
 public final class Places {
-    /** RFC 5322 §2.2: a field name is printable ASCII without colon; we also forbid spaces, as the RFC does. */
-    private static final Pattern FIELD = Pattern.compile("^([A-Za-z0-9][A-Za-z0-9_.-]{0,59}):(?:[ \\t]|$)");
-    /** Field names that only metadata uses: hyphenated (Message-ID, Queue-Code), X-prefixed or upper case. */
-    private static final Pattern METADATA_NAME = Pattern.compile(
+    /**
+     * RFC 5322 §2.2: a field name is printable ASCII without colon; we also forbid spaces, as the RFC
+     * does. Applied with {@code lookingAt} at a line start and at most 62 characters long, so its
+     * work per line is bounded whatever the line's length (java.util.regex is fine here).
+     */
+    private static final java.util.regex.Pattern FIELD =
+            java.util.regex.Pattern.compile("([A-Za-z0-9][A-Za-z0-9_.-]{0,59}):(?:[ \\t]|$)");
+    /**
+     * Field names that only metadata uses: hyphenated (Message-ID, Queue-Code), X-prefixed or upper
+     * case. Applied to a field name of at most 60 characters only.
+     */
+    private static final java.util.regex.Pattern METADATA_NAME = java.util.regex.Pattern.compile(
             "(?:[A-Za-z][A-Za-z0-9]*(?:-[A-Za-z0-9]+)+|[A-Z][A-Z0-9_]+)");
-    /** The mbox separator line ("From sender date") that precedes an RFC 5322 message in a mailbox. */
-    private static final Pattern MBOX_FROM = Pattern.compile("^From \\S+");
 
-    private static final Pattern ADDRESS = Pattern.compile(String.join("|",
-            "[A-Za-z0-9._%+-]+@[A-Za-z0-9-]+(?:\\.[A-Za-z0-9-]+)+", // e-mail (RFC 5322 addr-spec, common subset)
-            "(?i:\\b(?:https?|ftp)://[^\\s<>\"']+)", // URL (RFC 3986 schemes in common use)
-            "(?i:\\bwww\\.[^\\s<>\"']+)",
-            "\\b\\d{1,3}(?:\\.\\d{1,3}){3}\\b", // IPv4 dotted quad
-            "(?i:\\b(?:[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?\\.)+[a-z]{2,24}\\b)")); // host name (RFC 1123)
+    /*
+     * The address and identifier patterns run over whole documents, which are untrusted: a run of
+     * 200,000 letters or of "a." must cost no more than its length. They are RE2/J patterns: RE2/J
+     * simulates the automaton of the pattern over the text (Thompson's construction, as in RE2), so
+     * one search takes time linear in the text and no stack that grows with it (RE2/J README:
+     * "linear time regular expressions for Java").
+     *
+     * A find loop is linear overall only if no search reads far past the match it returns. Within
+     * one alternation, a branch of higher priority that is still alive when a lower one matched keeps
+     * the search reading (in "ab.cd%ab.cd%..." the e-mail branch outlives every host-name match), and
+     * a loop of such searches becomes quadratic. So each kind of address or identifier is a pattern
+     * of its own, written so that what can follow a match's end is bounded: greedy runs end at a
+     * character outside their class, and the host-name label is at most 63 characters (RFC 1035).
+     * Matches of different patterns may overlap; marking takes their union.
+     */
+    private static final List<Pattern> ADDRESS = List.of(
+            Pattern.compile("[A-Za-z0-9._%+-]+@[A-Za-z0-9-]+(?:\\.[A-Za-z0-9-]+)+"), // e-mail (RFC 5322 addr-spec, common subset)
+            Pattern.compile("(?i)\\b(?:https?|ftp)://[^\\s<>\"']+"), // URL (RFC 3986 schemes in common use)
+            Pattern.compile("(?i)\\bwww\\.[^\\s<>\"']+"),
+            Pattern.compile("\\b\\d{1,3}(?:\\.\\d{1,3}){3}\\b"), // IPv4 dotted quad
+            Pattern.compile("(?i)\\b(?:[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?\\.)+[a-z]{2,24}\\b")); // host name (RFC 1123)
 
     private static final String MONTH = "(?:Jan|Feb|Mar|Apr|May|Jun|Jul|Aug|Sep|Oct|Nov|Dec)[a-z]*\\.?";
-    private static final Pattern IDENTIFIER = Pattern.compile(String.join("|",
-            "\\b\\d{4}-\\d{2}-\\d{2}(?:[T ]\\d{2}:\\d{2}(?::\\d{2})?)?", // ISO 8601 date and time
-            "\\b\\d{1,2}[/.]\\d{1,2}[/.]\\d{2,4}\\b", // numeric day/month/year
-            "\\b\\d{1,2} " + MONTH + " \\d{4}\\b", // RFC 5322 date: 22 Aug 2002
-            "\\b" + MONTH + " \\d{1,2},? \\d{4}\\b", // Aug 22, 2002
-            "\\b\\d{1,2}:\\d{2}(?::\\d{2})?(?:\\s?[AaPp][Mm])?\\b", // time of day
-            "(?<=\\s)[+-]\\d{4}\\b", // time-zone offset
-            "\\b[A-Z]{2,8}[-_#/]?\\d{2,}\\b", // queue or ticket code: INC0012, OGX-4471
-            "\\b[A-Za-z]{1,8}[-_#]\\d+\\b", // prefixed number: ref-17, case#9
-            "#\\d+\\b", // numbered reference
-            "\\b\\d{4,}\\b", // long number: order, ticket, account
-            "\\b(?=[A-Za-z0-9]*\\d)(?=[A-Za-z0-9]*[A-Za-z])[A-Za-z0-9]{6,}\\b")); // mixed code or hex id
+    private static final List<Pattern> IDENTIFIER = List.of(
+            Pattern.compile("\\b\\d{4}-\\d{2}-\\d{2}(?:[T ]\\d{2}:\\d{2}(?::\\d{2})?)?"), // ISO 8601 date and time
+            Pattern.compile("\\b\\d{1,2}[/.]\\d{1,2}[/.]\\d{2,4}\\b"), // numeric day/month/year
+            Pattern.compile("\\b\\d{1,2} " + MONTH + " \\d{4}\\b"), // RFC 5322 date: 22 Aug 2002
+            Pattern.compile("\\b" + MONTH + " \\d{1,2},? \\d{4}\\b"), // Aug 22, 2002
+            Pattern.compile("\\b\\d{1,2}:\\d{2}(?::\\d{2})?(?:\\s?[AaPp][Mm])?\\b"), // time of day
+            // time-zone offset after white space: RE2 has no look-behind, so the space is matched
+            // and left unmarked (see markPattern)
+            Pattern.compile("\\s[+-]\\d{4}\\b"),
+            Pattern.compile("\\b[A-Z]{2,8}[-_#/]?\\d{2,}\\b"), // queue or ticket code: INC0012, OGX-4471
+            Pattern.compile("\\b[A-Za-z]{1,8}[-_#]\\d+\\b"), // prefixed number: ref-17, case#9
+            Pattern.compile("#\\d+\\b"), // numbered reference
+            Pattern.compile("\\b\\d{4,}\\b")); // long number: order, ticket, account
+    /**
+     * Mixed code or hex id: a word of letters and digits with at least one of each. RE2 has no
+     * look-ahead, so the word must start with letters then a digit or digits then a letter, which
+     * every such word does; words shorter than {@link #MIXED_MIN} are skipped after matching.
+     */
+    private static final Pattern MIXED = Pattern.compile("\\b(?:[A-Za-z]+[0-9]|[0-9]+[A-Za-z])[A-Za-z0-9]*\\b");
+    private static final int MIXED_MIN = 6;
 
     private final byte[] kinds;
 
@@ -60,8 +89,13 @@ public final class Places {
                 mark(kinds, line, ArtefactKind.BOILERPLATE);
             }
         }
-        markPattern(kinds, text, IDENTIFIER, ArtefactKind.IDENTIFIER);
-        markPattern(kinds, text, ADDRESS, ArtefactKind.ADDRESS);
+        for (Pattern pattern : IDENTIFIER) {
+            markPattern(kinds, text, pattern, 0, ArtefactKind.IDENTIFIER);
+        }
+        markPattern(kinds, text, MIXED, MIXED_MIN, ArtefactKind.IDENTIFIER);
+        for (Pattern pattern : ADDRESS) {
+            markPattern(kinds, text, pattern, 0, ArtefactKind.ADDRESS);
+        }
         for (Span region : headerRegions(text, lines)) {
             mark(kinds, region, ArtefactKind.HEADER);
         }
@@ -86,7 +120,7 @@ public final class Places {
     static List<Span> headerRegions(String text, List<Span> lines) {
         java.util.ArrayList<Span> regions = new java.util.ArrayList<>();
         int i = 0;
-        if (!lines.isEmpty() && MBOX_FROM.matcher(slice(text, lines.get(0))).find()) {
+        if (!lines.isEmpty() && isMboxFrom(text, lines.get(0))) {
             regions.add(lines.get(0));
             i = 1;
         }
@@ -96,7 +130,7 @@ public final class Places {
             int j = i;
             while (j < lines.size()) {
                 String line = slice(text, lines.get(j));
-                if (FIELD.matcher(line).find()) {
+                if (FIELD.matcher(line).lookingAt()) {
                     fields++;
                 } else if (fields > 0 && !line.isBlank() && (line.charAt(0) == ' ' || line.charAt(0) == '\t')) {
                     // folded continuation of the field above
@@ -110,8 +144,8 @@ public final class Places {
                 regions.add(new Span(lines.get(runStart).start(), lines.get(j - 1).end()));
             } else if (fields == 1) {
                 String line = slice(text, lines.get(runStart));
-                Matcher m = FIELD.matcher(line);
-                m.find();
+                java.util.regex.Matcher m = FIELD.matcher(line);
+                m.lookingAt();
                 int start = lines.get(runStart).start();
                 regions.add(METADATA_NAME.matcher(m.group(1)).matches()
                         ? new Span(start, lines.get(j - 1).end())
@@ -126,10 +160,23 @@ public final class Places {
         return text.substring(span.start(), span.end());
     }
 
-    private static void markPattern(byte[] kinds, String text, Pattern pattern, ArtefactKind kind) {
+    /** The mbox separator line ("From sender date") that precedes an RFC 5322 message in a mailbox. */
+    private static boolean isMboxFrom(String text, Span line) {
+        return line.end() - line.start() > 5 && text.startsWith("From ", line.start())
+                && !Character.isWhitespace(text.charAt(line.start() + 5));
+    }
+
+    /** Marks every match of at least {@code minLength} characters, leading white space left out. */
+    private static void markPattern(byte[] kinds, String text, Pattern pattern, int minLength, ArtefactKind kind) {
         Matcher m = pattern.matcher(text);
         while (m.find()) {
-            mark(kinds, new Span(m.start(), m.end()), kind);
+            int start = m.start();
+            while (start < m.end() && Character.isWhitespace(text.charAt(start))) {
+                start++;
+            }
+            if (m.end() - start >= minLength) {
+                mark(kinds, new Span(start, m.end()), kind);
+            }
         }
     }
 

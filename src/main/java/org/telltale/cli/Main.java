@@ -21,6 +21,15 @@ public final class Main {
         CommandLine cli = commandLine();
         try {
             return cli.execute(args);
+        } catch (Error e) {
+            // picocli hands only exceptions to ErrorHandler; an Error (the JVM out of stack or
+            // memory where no document could be named) still ends the run with one line.
+            PrintWriter err = cli.getErr();
+            err.println("telltale: " + ErrorHandler.oneLine(e));
+            if (java.util.Arrays.asList(args).contains("--verbose")) {
+                e.printStackTrace(err);
+            }
+            return ExitCodes.ERROR;
         } finally {
             cli.getOut().flush();
             cli.getErr().flush();
