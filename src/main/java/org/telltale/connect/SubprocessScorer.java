@@ -71,7 +71,7 @@ final class SubprocessScorer implements BatchScorer {
                         + ModelProcess.MAX_LINE_CHARS + " characters" + p.stderrTail());
             }
             throw new TransientFailure("the subprocess " + name + " did not answer within "
-                    + Durations.format(timeout) + " and was killed" + p.stderrTail());
+                    + Durations.format(timeout) + " and was killed" + p.stderrTail(), null, null, true);
         } catch (InterruptedException e) {
             p.kill();
             Thread.currentThread().interrupt();

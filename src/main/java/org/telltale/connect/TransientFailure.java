@@ -4,27 +4,40 @@ import java.time.Duration;
 
 /**
  * A failed request that may succeed when tried again: a timeout, a reset connection, HTTP 429 or
- * 5xx, a subprocess that died. Carries the delay the service asked for (Retry-After), if any.
+ * 5xx, a subprocess that died. Carries the delay the service asked for (Retry-After), if any, and
+ * whether the failure says the service is over capacity (429, 503, a timeout), which makes an
+ * adaptive limit back off.
  */
 final class TransientFailure extends RuntimeException {
     private static final long serialVersionUID = 1L;
     private final transient Duration retryAfter;
+    private final boolean overload;
 
-    TransientFailure(String message, Duration retryAfter, Throwable cause) {
+    TransientFailure(String message, Duration retryAfter, Throwable cause, boolean overload) {
         super(message, cause);
         this.retryAfter = retryAfter;
+        this.overload = overload;
+    }
+
+    TransientFailure(String message, Duration retryAfter, Throwable cause) {
+        this(message, retryAfter, cause, false);
     }
 
     TransientFailure(String message) {
-        this(message, null, null);
+        this(message, null, null, false);
     }
 
     TransientFailure(String message, Throwable cause) {
-        this(message, null, cause);
+        this(message, null, cause, false);
     }
 
     /** The delay the service asked for, or null when it named none. */
     Duration retryAfter() {
         return retryAfter;
+    }
+
+    /** Whether the service signalled it is over capacity: 429, 503 or no answer in time. */
+    boolean overload() {
+        return overload;
     }
 }

@@ -20,7 +20,8 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.atomic.AtomicInteger;
 
 /**
- * A fault-injecting model service on a raw loopback socket, one request per connection. Each POST
+ * A fault-injecting model service on a raw loopback socket, one request per connection (or, with
+ * {@link #keepAlive}, as many as the client sends while answers are correct). Each POST
  * takes the next scripted {@link Fault} (then answers correctly); a correct answer scores texts with
  * {@link LengthModel#expected} in the chosen protocol. Counts requests and the largest number it
  * held open at once. Raw sockets let it reset connections and cut bodies short, which an HTTP
@@ -31,7 +32,9 @@ final class FaultServer implements AutoCloseable {
 
     enum Fault {
         OK, RESET, SLOW, STATUS_500, STATUS_503, STATUS_429, STATUS_400, CUT_BODY, TRUNCATED_JSON, WRONG_SHAPE,
-        WRONG_ROWS, NAN, INFINITY, OTHER_LABELS, GARBAGE_BYTES
+        WRONG_ROWS, NAN, INFINITY, OTHER_LABELS, GARBAGE_BYTES,
+        /** Closes the connection on reading the request, before any byte of an answer: what a client sees when the server closed an idle connection just as the request went out. */
+        CLOSE_UNANSWERED
     }
 
     private final Protocol protocol;
@@ -50,6 +53,9 @@ final class FaultServer implements AutoCloseable {
     volatile long slowMillis = 2500;
     volatile long pauseMillis = 0;
     volatile String retryAfter = "1";
+    /** When set, connections stay open across requests (keep-alive) instead of one request per connection. */
+    volatile boolean keepAlive;
+    final AtomicInteger connections = new AtomicInteger();
 
     FaultServer(Protocol protocol) throws IOException {
         this.protocol = protocol;
@@ -84,12 +90,24 @@ final class FaultServer implements AutoCloseable {
     }
 
     private void serve(Socket s) {
+        connections.incrementAndGet();
         try (s) {
             s.setSoTimeout(10_000);
             InputStream in = s.getInputStream();
+            while (serveOne(s, in) && keepAlive) {
+                // next request on the same connection
+            }
+        } catch (IOException | InterruptedException e) {
+            // The client gave up (e.g. after its timeout); nothing to do.
+        }
+    }
+
+    /** Serves one request; false when the connection is done. */
+    private boolean serveOne(Socket s, InputStream in) throws IOException, InterruptedException {
+        {
             String head = readHead(in);
             if (head == null) {
-                return;
+                return false;
             }
             String[] lines = head.split("\r\n");
             String method = lines[0].split(" ")[0];
@@ -106,8 +124,8 @@ final class FaultServer implements AutoCloseable {
             byte[] body = in.readNBytes(length);
             OutputStream out = s.getOutputStream();
             if (method.equals("GET")) {
-                respond(out, 200, null, metadata());
-                return;
+                respond(out, 200, null, metadata(), !keepAlive);
+                return true;
             }
             posts.incrementAndGet();
             postTimesNanos.add(System.nanoTime());
@@ -122,9 +140,12 @@ final class FaultServer implements AutoCloseable {
                 }
             }
             Fault fault = script.poll();
-            act(fault == null ? Fault.OK : fault, s, out, texts(body));
-        } catch (IOException | InterruptedException e) {
-            // The client gave up (e.g. after its timeout); nothing to do.
+            fault = fault == null ? Fault.OK : fault;
+            if (fault == Fault.CLOSE_UNANSWERED) {
+                return false;
+            }
+            act(fault, s, out, texts(body));
+            return fault == Fault.OK;
         }
     }
 
@@ -135,7 +156,7 @@ final class FaultServer implements AutoCloseable {
             rows.add(LengthModel.expected(t));
         }
         switch (fault) {
-            case OK -> respond(out, 200, null, answer(labels, rows));
+            case OK -> respond(out, 200, null, answer(labels, rows), !keepAlive);
             case RESET -> {
                 out.write("HTTP/1.1 200 OK\r\nContent-Length: 500\r\n\r\n{\"labels\":".getBytes(StandardCharsets.UTF_8));
                 out.flush();
@@ -232,9 +253,14 @@ final class FaultServer implements AutoCloseable {
         return Double.isNaN(v) ? "NaN" : Double.isInfinite(v) ? (v > 0 ? "Infinity" : "-Infinity") : Double.toString(v);
     }
 
-    private static void respond(OutputStream out, int status, String retryAfter, String body) throws IOException {
+    private void respond(OutputStream out, int status, String retryAfter, String body) throws IOException {
+        respond(out, status, retryAfter, body, true);
+    }
+
+    /** Writes a whole answer; {@code close} says the connection ends after it (Connection: close). */
+    private void respond(OutputStream out, int status, String retryAfter, String body, boolean close) throws IOException {
         byte[] b = body.getBytes(StandardCharsets.UTF_8);
-        String head = "HTTP/1.1 " + status + " X\r\nContent-Type: application/json\r\nConnection: close\r\n"
+        String head = "HTTP/1.1 " + status + " X\r\nContent-Type: application/json\r\n" + (close ? "Connection: close\r\n" : "")
                 + (retryAfter == null ? "" : "Retry-After: " + retryAfter + "\r\n") + "Content-Length: " + b.length + "\r\n\r\n";
         out.write(head.getBytes(StandardCharsets.UTF_8));
         out.write(b);

@@ -208,4 +208,24 @@ class HttpFaultTest {
             assertEquals(16 + c.retries(), server.posts.get());
         }
     }
+
+    @ParameterizedTest
+    @EnumSource(Protocol.class)
+    void aReusedConnectionClosedBeforeAnyAnswerIsResentOnceWithoutCountingARetry(Protocol p) throws Exception {
+        try (FaultServer server = new FaultServer(p).then(Fault.OK, Fault.CLOSE_UNANSWERED);
+                TextClassifier c = Connectors.open(settings(server.url(), p).withRetries(0))) {
+            server.keepAlive = true;
+            assertCorrect(c.score(TEXTS));
+            assertCorrect(c.score(TEXTS)); // its connection is closed under it, as by an idle timeout
+            assertEquals(0, c.retries());
+            assertEquals(3, server.posts.get());
+            assertEquals(2, server.connections.get());
+        }
+    }
+
+    @ParameterizedTest
+    @EnumSource(Protocol.class)
+    void aFreshConnectionClosedBeforeAnyAnswerIsARetry(Protocol p) throws Exception {
+        recovers(p, Fault.CLOSE_UNANSWERED);
+    }
 }
