@@ -143,7 +143,7 @@ final class CsvReader extends CorpusReader {
             if (label != null && label.isEmpty()) {
                 label = null;
             }
-            return new Document(id == null ? "row-" + rows : id, text, label, place);
+            return new Document(id == null ? "row-" + rows : id, text, label, place, firstLine);
         }
     }
 

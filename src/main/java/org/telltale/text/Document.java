@@ -14,11 +14,22 @@ import java.util.Optional;
  * @param text   the original text, never rewritten; spans are offsets into it
  * @param label  the gold label, or {@code null} when the corpus carries none
  * @param origin file and line (or file) the document was read from, or {@code null}
+ * @param line   the line of the corpus file where the document's record begins (1-based: the JSON
+ *               Lines line, the first line of the CSV record), or 0 when the document is a whole
+ *               file or was not read from one; provenance like {@code origin}
  */
-public record Document(String id, String text, String label, String origin) {
+public record Document(String id, String text, String label, String origin, long line) {
     public Document {
         Objects.requireNonNull(id, "id");
         Objects.requireNonNull(text, "text");
+        if (line < 0) {
+            throw new IllegalArgumentException("line must be 0 (none) or positive: " + line);
+        }
+    }
+
+    /** A document whose origin names no line of a corpus file. */
+    public Document(String id, String text, String label, String origin) {
+        this(id, text, label, origin, 0);
     }
 
     /** A document that was not read from a file. */

@@ -86,7 +86,7 @@ final class JsonLinesReader extends CorpusReader {
         String where = id == null ? place : place + " (id '" + id + "')";
         String text = fields.text(node.get(fields.textField()), where);
         String label = fields.label(node.get(fields.labelField()), where);
-        return new Document(id == null ? "line-" + lines.lineNumber() : id, text, label, place);
+        return new Document(id == null ? "line-" + lines.lineNumber() : id, text, label, place, lines.lineNumber());
     }
 
     private static String firstLine(String message) {

@@ -30,6 +30,24 @@ class CsvReaderTest {
     }
 
     @Test
+    void eachDocumentKnowsTheFirstLineOfItsRecord() throws Exception {
+        // RFC 4180 §2: a quoted field may hold line breaks, so a record can span several lines;
+        // the file is read back independently with java.lang.String#lines (LF, CRLF, CR).
+        Path file = CorpusFiles.write(dir, "t.csv", "id,text\r\n"
+                + "r1,\"one\r\ntwo\r\nthree\"\r\n"
+                + "\r\n"
+                + "r2,plain\r"
+                + "r3,\"a\nb\"\n"
+                + "r4,last\n");
+        List<Document> docs = Corpora.readAll(file, CorpusSettings.DEFAULTS);
+        assertEquals(List.of(2L, 6L, 7L, 9L), docs.stream().map(Document::line).toList());
+        List<String> lines = java.nio.file.Files.readString(file).lines().toList();
+        for (Document d : docs) {
+            assertTrue(lines.get((int) d.line() - 1).startsWith(d.id() + ","), d + " at " + d.line());
+        }
+    }
+
+    @Test
     void idAndLabelColumnsAreOptional() {
         Path file = CorpusFiles.write(dir, "t.csv", "body\nfirst\nsecond\n");
         List<Document> docs = Corpora.readAll(file, CorpusSettings.DEFAULTS.withFields("id", "body", "label"));

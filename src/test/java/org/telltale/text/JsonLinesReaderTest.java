@@ -30,6 +30,20 @@ class JsonLinesReaderTest {
     }
 
     @Test
+    void eachDocumentKnowsTheLineOfItsRecordPastBlankLinesAndMixedLineEnds() throws Exception {
+        // JSON Lines (jsonlines.org): one record per line; LF, CRLF and CR all end a line, as
+        // java.lang.String#lines counts them, so the file is read back independently that way.
+        Path file = CorpusFiles.write(dir, "t.jsonl", "\uFEFF{\"id\": \"a\", \"text\": \"x\"}\r\n\n"
+                + "{\"id\": \"b\", \"text\": \"y\"}\r  \n{\"id\": \"c\", \"text\": \"z\"}\n");
+        List<Document> docs = Corpora.readAll(file, CorpusSettings.DEFAULTS);
+        assertEquals(List.of(1L, 3L, 5L), docs.stream().map(Document::line).toList());
+        List<String> lines = java.nio.file.Files.readString(file).lines().toList();
+        for (Document d : docs) {
+            assertTrue(lines.get((int) d.line() - 1).contains("\"id\": \"" + d.id() + "\""), d + " at " + d.line());
+        }
+    }
+
+    @Test
     void remapsFieldNames() {
         Path file = CorpusFiles.write(dir, "mail.jsonl", "{\"msg\": \"M7\", \"body\": \"Hello\", \"queue\": \"sales\"}\n");
         List<Document> docs = Corpora.readAll(file, CorpusSettings.DEFAULTS.withFields("msg", "body", "queue"));
