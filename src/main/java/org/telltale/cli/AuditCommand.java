@@ -23,6 +23,7 @@ import org.telltale.model.TextClassifier;
 import org.telltale.report.html.HtmlReports;
 import org.telltale.report.json.AuditJson;
 import org.telltale.report.json.ExplanationsJson;
+import org.telltale.report.sarif.SarifWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -65,6 +66,8 @@ final class AuditCommand implements Callable<Integer> {
     boolean quiet;
     @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Seed of every random choice. Default: ${DEFAULT-VALUE}.")
     long seed;
+    @Option(names = "--sarif", paramLabel = "FILE", description = "Also write the findings as a SARIF 2.1.0 log for code-scanning views (docs/ci.md); replaced only with --force.")
+    Path sarif;
 
     @Override
     public Integer call() throws IOException {
@@ -83,6 +86,9 @@ final class AuditCommand implements Callable<Integer> {
             throw new UsageException(e.getMessage());
         }
         Policy rules = policy == null ? Policy.empty() : Policy.read(policy);
+        if (sarif != null) {
+            SarifWriter.refuseToReplace(sarif, force || resume);
+        }
         OutputFolder folder = OutputFolder.open(out, force, resume);
         ExplainSettings explain = ExplainSettings.defaults().withWords(words).withProbes(probes).withSeed(seed)
                 .withAnalyzer(analyzer.spec());
@@ -109,6 +115,9 @@ final class AuditCommand implements Callable<Integer> {
         files.add(folder.write(OutputFolder.REPORT, HtmlReports.audit(outcome.result(), outcome.explanations())).toString());
         files.add(folder.file(OutputFolder.JOURNAL).toString());
         AuditResult result = outcome.result();
+        if (sarif != null) {
+            files.add(SarifOutput.write(result, sarif, true, corpus.path(), corpus::open).toString());
+        }
         AuditPrinter.print(spec.commandLine().getOut(), result, files);
         return gate != null && !result.open(gate).isEmpty() ? ExitCodes.GATE : ExitCodes.OK;
     }

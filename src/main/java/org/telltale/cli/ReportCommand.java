@@ -3,8 +3,11 @@ package org.telltale.cli;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.telltale.ExitCodes;
+import org.telltale.UsageException;
+import org.telltale.audit.AuditResult;
 import org.telltale.report.html.HtmlReports;
 import org.telltale.report.html.ReportSources;
+import org.telltale.report.sarif.SarifWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -32,20 +35,48 @@ final class ReportCommand implements Callable<Integer> {
             description = "audit.json, an explanations JSON document, or explanations.jsonl.")
     Path from;
 
-    @Option(names = "--out", required = true, paramLabel = "FILE", description = "The HTML file to write.")
+    @Option(names = "--out", paramLabel = "FILE", description = "The HTML file to write.")
     Path out;
 
-    @Option(names = "--force", description = "Replace FILE if it exists.")
+    @Option(names = "--sarif", paramLabel = "FILE",
+            description = "Write the audit's findings as a SARIF 2.1.0 log (from audit.json only; docs/ci.md).")
+    Path sarif;
+
+    /** With --sarif: the corpus the audit read, so that locations point at its records' lines. */
+    @Mixin
+    CorpusOptions corpus;
+
+    @Option(names = "--force", description = "Replace existing output files.")
     boolean force;
 
     @Override
     public Integer call() {
-        ReportSources.Rendered rendered = ReportSources.render(from);
-        HtmlReports.write(rendered.html(), out, force);
-        if (rendered.note() != null) {
-            spec.commandLine().getErr().println("telltale: " + rendered.note());
+        if (out == null && sarif == null) {
+            throw new UsageException("nothing to write: give --out FILE, --sarif FILE or both");
         }
-        spec.commandLine().getOut().println(out);
+        if (corpus.given() && sarif == null) {
+            throw new UsageException("--corpus is read only with --sarif (it locates the findings' documents)");
+        }
+        if (out != null) {
+            HtmlReports.refuseToReplace(out, force);
+        }
+        if (sarif != null) {
+            SarifWriter.refuseToReplace(sarif, force);
+            AuditResult audit = ReportSources.readAudit(from);
+            Path corpusPath = corpus.given() ? corpus.path() : Path.of(audit.summary().corpus());
+            SarifOutput.write(audit, sarif, force, corpusPath, corpus.given() ? corpus::open : null);
+        }
+        if (out != null) {
+            ReportSources.Rendered rendered = ReportSources.render(from);
+            HtmlReports.write(rendered.html(), out, force);
+            if (rendered.note() != null) {
+                spec.commandLine().getErr().println("telltale: " + rendered.note());
+            }
+            spec.commandLine().getOut().println(out);
+        }
+        if (sarif != null) {
+            spec.commandLine().getOut().println(sarif);
+        }
         return ExitCodes.OK;
     }
 }

@@ -57,7 +57,16 @@ public final class ReportSources {
                 + ExplanationsJson.FORMAT);
     }
 
-    private static AuditResult readAudit(Path from) {
+    /** Reads {@code audit.json}; a clear error when {@code from} is another kind of file. */
+    public static AuditResult readAudit(Path from) {
+        if (!Files.isRegularFile(from)) {
+            throw new TelltaleException(from + ": no such file");
+        }
+        String format = formatOf(from);
+        if (!AuditJson.FORMAT.equals(format)) {
+            throw new TelltaleException(from + ": format '" + format + "' is not " + AuditJson.FORMAT
+                    + "; SARIF and comparisons are written from an audit's audit.json");
+        }
         try {
             return AuditJson.read(from);
         } catch (IOException e) {
