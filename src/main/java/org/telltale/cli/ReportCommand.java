@@ -21,7 +21,8 @@ import picocli.CommandLine.Spec;
         versionProvider = VersionProvider.class,
         description = {
             "Renders a self-contained HTML report from audit.json (with the explanations.jsonl beside it) "
-                    + "or from explanations written by explain --json; the kind is read from the file's format field.",
+                    + "or from explanations written by explain --json; the kind is read from the file's format field. "
+                    + "From audit.json it also writes the findings as a SARIF 2.1.0 log (--sarif).",
             "The report contains document text and may contain personal data: handle it under your "
                     + "organisation's data-protection rules."})
 final class ReportCommand implements Callable<Integer> {
