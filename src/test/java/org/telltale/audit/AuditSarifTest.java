@@ -25,7 +25,7 @@ import org.telltale.ExitCodes;
 import org.telltale.cli.Main;
 import org.telltale.model.ModelFile;
 import org.telltale.report.json.AuditJson;
-import org.telltale.report.sarif.ArtefactRules;
+import org.telltale.report.sarif.SarifRules;
 import org.telltale.report.sarif.SarifMultitool;
 import org.telltale.report.sarif.SarifWriter;
 import org.telltale.text.Document;
@@ -84,7 +84,7 @@ class AuditSarifTest {
         assertEquals(EnumSet.allOf(ArtefactKind.class), kinds, "the policy and the planted artefacts give every kind");
         Set<String> ruleIds = new HashSet<>();
         run.at("/tool/driver/rules").forEach(r -> ruleIds.add(r.get("id").asText()));
-        assertEquals(kinds.stream().map(ArtefactRules::id).collect(Collectors.toSet()), ruleIds);
+        assertEquals(kinds.stream().map(SarifRules::id).collect(Collectors.toSet()), ruleIds);
         assertEquals(3, run.at("/properties/telltale/seed").asInt(), "the run's settings travel with the log");
         assertEquals(30, run.at("/properties/telltale/settings/sample").asInt());
 
@@ -94,7 +94,7 @@ class AuditSarifTest {
         for (int i = 0; i < audit.findings().size(); i++) {
             AuditResult.Finding f = audit.findings().get(i);
             JsonNode r = run.get("results").get(i);
-            assertEquals(ArtefactRules.id(f.kind()), r.get("ruleId").asText());
+            assertEquals(SarifRules.id(f.kind()), r.get("ruleId").asText());
             assertEquals(Map.of("high", "error", "medium", "warning", "low", "note").get(f.severity().key()),
                     r.get("level").asText());
             assertEquals(ArtefactIdentity.of(f).fingerprint(), r.get("partialFingerprints").get(SarifWriter.IDENTITY_KEY).asText());

@@ -41,7 +41,7 @@ public final class AuditSarif {
     public static SarifLog of(AuditResult audit, String version, String corpusUri, Map<String, Location> places) {
         Set<ArtefactKind> kinds = EnumSet.noneOf(ArtefactKind.class);
         audit.findings().forEach(f -> kinds.add(f.kind()));
-        List<Rule> rules = kinds.stream().map(ArtefactRules::of).toList();
+        List<Rule> rules = kinds.stream().map(SarifRules::of).toList();
         List<Result> results = new ArrayList<>();
         for (Finding f : audit.findings()) {
             results.add(result(f, corpusUri, places));
@@ -94,7 +94,7 @@ public final class AuditSarif {
             props.put("policy", f.policy());
         }
         SarifLog.Suppression suppression = f.suppressed() ? new SarifLog.Suppression(f.policyNote()) : null;
-        return new Result(ArtefactRules.id(f.kind()), level(f.severity()), message(f),
+        return new Result(SarifRules.id(f.kind()), level(f.severity()), message(f),
                 Map.of(SarifWriter.IDENTITY_KEY, identity.fingerprint()), locations, suppression, null, props);
     }
 

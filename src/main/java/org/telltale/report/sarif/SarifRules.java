@@ -9,11 +9,11 @@ import org.telltale.report.sarif.SarifLog.Rule;
  * what the kind means and how to take it out of the data. The ids are stable; viewers group
  * results by them across runs.
  */
-public final class ArtefactRules {
+public final class SarifRules {
     private static final String CAUTION = "Explanations are local approximations of the model, not causes; "
             + "a clean audit does not certify a model.";
 
-    private ArtefactRules() {
+    private SarifRules() {
     }
 
     /** The rule id of a kind: {@code TELLTALE-HEADER}, {@code TELLTALE-ADDRESS}, … */
