@@ -96,19 +96,6 @@ public final class Auditor {
         this.progress = progress == null ? Progress.SILENT : progress;
     }
 
-    /**
-     * What identifies an audit for {@code --resume}: everything that decides its result.
-     * {@code explainSettings} is the explainer's own description of its settings.
-     */
-    public static String fingerprint(AuditSettings settings, long seed, String model, String corpus, long corpusBytes,
-            String explainSettings) {
-        // Everything but the gate: --fail-on changes the exit code, never the work.
-        AuditSettings work = new AuditSettings(settings.sample(), settings.probes(), settings.words(), settings.picks(),
-                settings.scrubAll(), "-", settings.alpha(), settings.batch(), settings.analyzer(), settings.policy());
-        return String.join("|", "telltale.audit/1", work.toString(), "seed=" + seed, "model=" + model,
-                "corpus=" + corpus, "bytes=" + corpusBytes, explainSettings);
-    }
-
     /** Runs the audit over {@code corpus} (opened afresh for each pass), journaling into {@code journal}. */
     public Outcome run(Supplier<CorpusReader> corpus, Journal journal, String model, String corpusName) {
         long started = System.nanoTime();
@@ -198,17 +185,19 @@ public final class Auditor {
         s.sample = new StratifiedSample(settings.sample(), seed);
         progress.phase("scoring", -1);
         try (CorpusReader reader = corpus.get()) {
+            // A batch the journal holds is read back at its own size, which may differ from this
+            // run's: batch size is tuning, and a resumed run may change it.
             List<Document> batch = new ArrayList<>(settings.batch());
-            int number = 0;
+            long position = 0;
             while (reader.hasNext()) {
-                batch.add(reader.next());
-                if (batch.size() == settings.batch()) {
-                    scoreBatch(number++, batch, journal, s);
-                    batch.clear();
+                Journal.ScoredBatch done = journal.takeScored(position);
+                int size = done == null ? settings.batch() : done.predicted().size();
+                while (batch.size() < size && reader.hasNext()) {
+                    batch.add(reader.next());
                 }
-            }
-            if (!batch.isEmpty()) {
-                scoreBatch(number, batch, journal, s);
+                scoreBatch(position, batch, done, journal, s);
+                position += batch.size();
+                batch.clear();
             }
             s.skipped = reader.skipped().bad();
         }
@@ -219,14 +208,13 @@ public final class Auditor {
         return s;
     }
 
-    private void scoreBatch(int number, List<Document> batch, Journal journal, Scoring s) {
+    private void scoreBatch(long start, List<Document> batch, Journal.ScoredBatch done, Journal journal, Scoring s) {
         List<String> ids = batch.stream().map(Document::id).toList();
-        Journal.ScoredBatch done = journal.takeScored(number);
         List<String> labels;
         List<String> predicted;
         if (done != null) {
             if (done.idsHash() != Journal.idsHash(ids) || done.predicted().size() != ids.size()) {
-                throw new TelltaleException(journal.file() + ": batch " + number + " (documents " + ids.get(0) + " to "
+                throw new TelltaleException(journal.file() + ": the batch at document " + (start + 1) + " (" + ids.get(0) + " to "
                         + ids.get(ids.size() - 1) + ") differs from the journal: the corpus changed since the audit "
                         + "began; rerun without --resume and with --force to start over");
             }
@@ -244,7 +232,7 @@ public final class Auditor {
             for (int i = 0; i < scores.size(); i++) {
                 predicted.add(scores.predicted(i));
             }
-            journal.appendScored(number, ids, labels, predicted, newRetries());
+            journal.appendScored(start, ids, labels, predicted, newRetries());
         }
         if (s.labels == null) {
             s.labels = List.copyOf(labels);

@@ -21,8 +21,10 @@ import org.telltale.TelltaleException;
 
 /**
  * The append-only record of an audit's finished work, one JSON object per line, each line forced
- * to disk before the next piece of work starts: a {@code start} line with the run's fingerprint,
- * one {@code scored} line per scored batch of the corpus, and one {@code explained} line per
+ * to disk before the next piece of work starts: a {@code start} line with the format, version and
+ * the run's {@link RunFingerprint} field by field, one {@code scored} line per scored batch of the
+ * corpus (keyed by the position of its first document, so that a resumed run may use another
+ * batch size), and one {@code explained} line per
  * explained document (the explanation in the {@code telltale.explanations} line form). A killed
  * audit leaves at most one torn last line, which {@link #resume} cuts off; everything before it is
  * kept and not redone.
@@ -31,12 +33,16 @@ import org.telltale.TelltaleException;
  */
 public final class Journal implements AutoCloseable {
     private static final ObjectMapper MAPPER = new ObjectMapper();
+    /** The journal's format name and version, in its start line. */
+    public static final String FORMAT = "telltale.journal";
+    public static final int VERSION = 2;
 
     /**
-     * One scored batch: a hash of its documents' ids (to notice a corpus that changed), the model's
-     * labels, and the label the model predicted for each document.
+     * One scored batch: the position in the corpus of its first document, a hash of its documents'
+     * ids (to notice a corpus that changed), the model's labels, and the label the model predicted
+     * for each document.
      */
-    public record ScoredBatch(int batch, long idsHash, List<String> labels, List<String> predicted, long retries) {
+    public record ScoredBatch(long start, long idsHash, List<String> labels, List<String> predicted, long retries) {
         public ScoredBatch {
             labels = List.copyOf(labels);
             predicted = List.copyOf(predicted);
@@ -57,11 +63,11 @@ public final class Journal implements AutoCloseable {
 
     private final Path file;
     private final FileChannel channel;
-    private final Map<Integer, ScoredBatch> scored;
+    private final Map<Long, ScoredBatch> scored;
     private final Map<String, String> explained;
     private long journaledRetries;
 
-    private Journal(Path file, FileChannel channel, Map<Integer, ScoredBatch> scored, Map<String, String> explained,
+    private Journal(Path file, FileChannel channel, Map<Long, ScoredBatch> scored, Map<String, String> explained,
             long journaledRetries) {
         this.file = file;
         this.channel = channel;
@@ -71,7 +77,7 @@ public final class Journal implements AutoCloseable {
     }
 
     /** Starts a new journal at {@code file}, replacing any old one. */
-    public static Journal create(Path file, String fingerprint) {
+    public static Journal create(Path file, RunFingerprint fingerprint) {
         try {
             refuseLink(file);
             FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.WRITE,
@@ -79,7 +85,10 @@ public final class Journal implements AutoCloseable {
             Journal journal = new Journal(file, channel, new LinkedHashMap<>(), new LinkedHashMap<>(), 0);
             ObjectNode start = MAPPER.createObjectNode();
             start.put("type", "start");
-            start.put("fingerprint", fingerprint);
+            start.put("format", FORMAT);
+            start.put("version", VERSION);
+            ObjectNode fields = start.putObject("fingerprint");
+            fingerprint.fields().forEach(fields::put);
             journal.append(start.toString());
             return journal;
         } catch (IOException e) {
@@ -89,9 +98,9 @@ public final class Journal implements AutoCloseable {
 
     /**
      * Opens the journal of an interrupted audit: checks that it was written by the same run
-     * (fingerprint), cuts off a torn last line, and loads the finished work.
+     * (fingerprint, field by field), cuts off a torn last line, and loads the finished work.
      */
-    public static Journal resume(Path file, String fingerprint) {
+    public static Journal resume(Path file, RunFingerprint fingerprint) {
         if (!Files.isRegularFile(file, LinkOption.NOFOLLOW_LINKS)) {
             throw new TelltaleException("nothing to resume: no journal at " + file);
         }
@@ -103,7 +112,7 @@ public final class Journal implements AutoCloseable {
             }
             String text = new String(bytes, 0, end, StandardCharsets.UTF_8);
             String[] lines = text.isEmpty() ? new String[0] : text.split("\n", -1);
-            Map<Integer, ScoredBatch> scored = new LinkedHashMap<>();
+            Map<Long, ScoredBatch> scored = new LinkedHashMap<>();
             Map<String, String> explained = new LinkedHashMap<>();
             long retries = 0;
             boolean started = false;
@@ -115,20 +124,21 @@ public final class Journal implements AutoCloseable {
                 String type = node.path("type").asText();
                 switch (type) {
                     case "start" -> {
-                        String was = node.path("fingerprint").asText();
-                        if (!was.equals(fingerprint)) {
-                            throw new TelltaleException(file + " was written by an audit with other settings, model or "
-                                    + "corpus; rerun without --resume and with --force to start over (journal: " + was
-                                    + "; now: " + fingerprint + ")");
+                        checkFormat(node, file);
+                        RunFingerprint was = fingerprintOf(node.get("fingerprint"), file);
+                        var difference = was.difference(fingerprint);
+                        if (difference.isPresent()) {
+                            throw new TelltaleException(file + ": cannot resume an audit whose " + difference.get()
+                                    + "; rerun without --resume and with --force to start over");
                         }
                         started = true;
                     }
                     case "scored" -> {
-                        ScoredBatch batch = new ScoredBatch(node.path("batch").asInt(),
+                        ScoredBatch batch = new ScoredBatch(node.path("start").asLong(),
                                 Long.parseUnsignedLong(node.path("ids_hash").asText("0"), 16),
                                 interned(strings(node.path("labels"))), interned(strings(node.path("predicted"))),
                                 node.path("retries").asLong());
-                        scored.put(batch.batch(), batch);
+                        scored.put(batch.start(), batch);
                         retries += batch.retries();
                     }
                     case "explained" -> {
@@ -163,11 +173,11 @@ public final class Journal implements AutoCloseable {
     }
 
     /**
-     * The finished batch {@code batch}, or {@code null}; handed out once, so that the journal does
-     * not keep the whole corpus's predictions in memory.
+     * The finished batch that starts at corpus position {@code start}, or {@code null}; handed out
+     * once, so that the journal does not keep the whole corpus's predictions in memory.
      */
-    public ScoredBatch takeScored(int batch) {
-        return scored.remove(batch);
+    public ScoredBatch takeScored(long start) {
+        return scored.remove(start);
     }
 
     /** The explanation line of the finished document {@code id}, or {@code null}. */
@@ -185,10 +195,11 @@ public final class Journal implements AutoCloseable {
         return journaledRetries;
     }
 
-    public void appendScored(int batch, List<String> ids, List<String> labels, List<String> predicted, long retries) {
+    /** Appends a scored batch whose first document is at corpus position {@code start}. */
+    public void appendScored(long start, List<String> ids, List<String> labels, List<String> predicted, long retries) {
         ObjectNode node = MAPPER.createObjectNode();
         node.put("type", "scored");
-        node.put("batch", batch);
+        node.put("start", start);
         node.put("ids_hash", Long.toHexString(idsHash(ids)));
         ArrayNode labelArray = node.putArray("labels");
         labels.forEach(labelArray::add);
@@ -247,6 +258,25 @@ public final class Journal implements AutoCloseable {
             throw new TelltaleException(file + ":" + number + ": damaged journal line (" + e.getOriginalMessage()
                     + "); rerun with --force to start over");
         }
+    }
+
+    private static void checkFormat(JsonNode start, Path file) {
+        String format = start.path("format").asText("");
+        int version = start.path("version").asInt(1);
+        if (!format.equals(FORMAT) || version != VERSION) {
+            throw new TelltaleException(file + ": not a " + FORMAT + " version " + VERSION + " journal (found "
+                    + (format.isEmpty() ? "an older journal without a format" : format + " version " + version)
+                    + "); rerun without --resume and with --force to start over");
+        }
+    }
+
+    private static RunFingerprint fingerprintOf(JsonNode fields, Path file) {
+        if (fields == null || !fields.isObject()) {
+            throw new TelltaleException(file + ":1: the start line has no fingerprint object");
+        }
+        Map<String, String> out = new LinkedHashMap<>();
+        fields.fields().forEachRemaining(e -> out.put(e.getKey(), e.getValue().asText()));
+        return new RunFingerprint(out);
     }
 
     private static List<String> strings(JsonNode array) {

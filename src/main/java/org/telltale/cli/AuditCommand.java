@@ -1,7 +1,6 @@
 package org.telltale.cli;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -15,10 +14,12 @@ import org.telltale.audit.Auditor;
 import org.telltale.audit.Journal;
 import org.telltale.audit.OutputFolder;
 import org.telltale.audit.Policy;
+import org.telltale.audit.RunFingerprint;
 import org.telltale.audit.Severity;
 import org.telltale.explain.ExplainSettings;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
+import org.telltale.connect.ModelIdentity;
 import org.telltale.model.TextClassifier;
 import org.telltale.report.html.HtmlReports;
 import org.telltale.report.json.AuditJson;
@@ -92,12 +93,12 @@ final class AuditCommand implements Callable<Integer> {
         OutputFolder folder = OutputFolder.open(out, force, resume);
         ExplainSettings explain = ExplainSettings.defaults().withWords(words).withProbes(probes).withSeed(seed)
                 .withAnalyzer(analyzer.spec());
-        long corpusBytes = Files.isRegularFile(corpus.path()) ? Files.size(corpus.path()) : 0;
         Auditor.Progress progress = AuditProgressBar.forTerminal(quiet);
         Auditor.Outcome outcome;
         try (TextClassifier classifier = model.open()) {
-            String fingerprint = Auditor.fingerprint(settings, seed, classifier.describe(),
-                    corpus.path().getFileName().toString(), corpusBytes, explain.toString());
+            RunFingerprint fingerprint = RunFingerprint.of(RunFingerprint.corpus(corpus.path()),
+                    ModelIdentity.of(model.settings()), seed, settings, policy == null ? null : RunFingerprint.sha256(policy),
+                    explain);
             Path journalFile = folder.file(OutputFolder.JOURNAL);
             Explainer explainer = new Explainer(classifier, explain);
             Auditor auditor = new Auditor(classifier, d -> explainer.explain(d, null), new Codec(), analyzer.analyzer(),

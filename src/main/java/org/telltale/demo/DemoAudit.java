@@ -1,17 +1,15 @@
 package org.telltale.demo;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.io.IOException;
 import java.util.Locale;
 import java.util.stream.Collectors;
-import org.telltale.TelltaleException;
 import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditSettings;
 import org.telltale.audit.Auditor;
 import org.telltale.audit.Journal;
 import org.telltale.audit.OutputFolder;
 import org.telltale.audit.Policy;
+import org.telltale.audit.RunFingerprint;
 import org.telltale.explain.ExplainSettings;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
@@ -48,8 +46,10 @@ final class DemoAudit {
                 .withSeed(settings.seed()).withAnalyzer(ANALYZER);
         OutputFolder folder = OutputFolder.open(dir, true, false);
         String corpusName = corpus.getFileName().toString();
-        String fingerprint = Auditor.fingerprint(audit, settings.seed(), classifier.describe(), corpusName, size(corpus),
-                explain.toString());
+        // The demo never resumes; its fingerprint still says what decided the result.
+        RunFingerprint fingerprint = RunFingerprint.of(RunFingerprint.corpus(corpus),
+                java.util.Map.of("model_kind", "in-process", "model", classifier.describe()), settings.seed(), audit, null,
+                explain);
         Explainer explainer = new Explainer(classifier, explain);
         Auditor auditor = new Auditor(classifier, d -> explainer.explain(d, null), new Codec(),
                 Analyzers.byName(ANALYZER), audit, settings.seed(), Policy.empty(), new Steps(progress));
@@ -63,14 +63,6 @@ final class DemoAudit {
         folder.write(OutputFolder.AUDIT, AuditJson.toJson(outcome.result()) + "\n");
         HtmlReports.write(HtmlReports.audit(outcome.result(), outcome.explanations()), folder.file(OutputFolder.REPORT), true);
         return outcome.result();
-    }
-
-    private static long size(Path file) {
-        try {
-            return Files.size(file);
-        } catch (IOException e) {
-            throw new TelltaleException("cannot read " + file + ": " + e.getMessage(), e);
-        }
     }
 
     /** The audit's phases as progress lines, with a count every quarter of a long phase. */

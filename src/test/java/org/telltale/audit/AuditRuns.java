@@ -38,8 +38,8 @@ final class AuditRuns {
         Explainer explainer = new Explainer(model, explain);
         Auditor auditor = new Auditor(model, d -> explainer.explain(d, null), CODEC, Analyzers.byName(settings.analyzer()),
                 settings, seed, policy, Auditor.Progress.SILENT);
-        String fingerprint = Auditor.fingerprint(settings, seed, model.describe(), corpus.getFileName().toString(), 0,
-                explain.toString());
+        RunFingerprint fingerprint = RunFingerprint.of(RunFingerprint.corpus(corpus),
+                java.util.Map.of("model_kind", "in-process", "model", model.describe()), seed, settings, null, explain);
         try (Journal journal = Journal.create(dir.resolve("journal.jsonl"), fingerprint)) {
             return auditor.run(() -> Corpora.open(corpus), journal, model.describe(), corpus.getFileName().toString());
         }

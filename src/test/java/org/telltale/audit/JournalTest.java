@@ -15,18 +15,20 @@ import org.junit.jupiter.api.io.TempDir;
 import org.telltale.TelltaleException;
 
 class JournalTest {
+    private static final RunFingerprint RUN_A = RunFingerprint.builder().with("corpus_sha256", "c0ffee")
+            .with("model", "sha256:ab12").with("seed", 7).with("words", 8).build();
 
     @Test
     void resumeKeepsFinishedWorkAndCutsATornLastLine(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("journal.jsonl");
-        try (Journal journal = Journal.create(file, "run-a")) {
+        try (Journal journal = Journal.create(file, RUN_A)) {
             journal.appendScored(0, List.of("t1", "t2"), List.of("billing", "outage"), List.of("billing", "outage"), 2);
             journal.appendExplained("t2", "{\"id\":\"t2\",\"label\":\"outage\"}", 1);
         }
         // A kill in the middle of a write leaves part of a line behind.
         Files.writeString(file, "{\"type\":\"explained\",\"id\":\"t1\",\"expl", StandardCharsets.UTF_8,
                 StandardOpenOption.APPEND);
-        try (Journal journal = Journal.resume(file, "run-a")) {
+        try (Journal journal = Journal.resume(file, RUN_A)) {
             Journal.ScoredBatch batch = journal.takeScored(0);
             assertEquals(List.of("billing", "outage"), batch.predicted());
             assertEquals(Journal.idsHash(List.of("t1", "t2")), batch.idsHash());
@@ -40,7 +42,7 @@ class JournalTest {
         List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
         assertEquals(4, lines.size());
         assertTrue(lines.get(3).startsWith("{\"type\":\"explained\",\"id\":\"t1\""), lines.get(3));
-        try (Journal again = Journal.resume(file, "run-a")) {
+        try (Journal again = Journal.resume(file, RUN_A)) {
             assertEquals(2, again.explainedCount());
         }
     }
@@ -48,14 +50,32 @@ class JournalTest {
     @Test
     void refusesTheJournalOfAnotherRunOrADamagedOne(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("journal.jsonl");
-        Journal.create(file, "run-a").close();
-        TelltaleException other = assertThrows(TelltaleException.class, () -> Journal.resume(file, "run-b"));
-        assertTrue(other.getMessage().contains("--force"), other.getMessage());
-
-        Files.writeString(file, "{\"type\":\"start\",\"fingerprint\":\"run-a\"}\n{oops\n{\"type\":\"scored\"}\n");
-        TelltaleException damaged = assertThrows(TelltaleException.class, () -> Journal.resume(file, "run-a"));
+        Journal.create(file, RUN_A).close();
+        String header = Files.readAllLines(file, StandardCharsets.UTF_8).get(0);
+        Files.writeString(file, header + "\n{oops\n{\"type\":\"scored\"}\n");
+        TelltaleException damaged = assertThrows(TelltaleException.class, () -> Journal.resume(file, RUN_A));
         assertTrue(damaged.getMessage().contains("journal.jsonl:2"), damaged.getMessage());
 
-        assertThrows(TelltaleException.class, () -> Journal.resume(dir.resolve("none.jsonl"), "run-a"));
+        assertThrows(TelltaleException.class, () -> Journal.resume(dir.resolve("none.jsonl"), RUN_A));
+    }
+
+    @Test
+    void aResumeWithOtherResultSettingsNamesTheOneFieldWithBothValues(@TempDir Path dir) {
+        Path file = dir.resolve("journal.jsonl");
+        Journal.create(file, RUN_A).close();
+        RunFingerprint otherSeed = RunFingerprint.builder().with("corpus_sha256", "c0ffee").with("model", "sha256:ab12")
+                .with("seed", 8).with("words", 8).build();
+        TelltaleException e = assertThrows(TelltaleException.class, () -> Journal.resume(file, otherSeed));
+        assertEquals(file + ": cannot resume an audit whose seed was '7' and is now '8'; rerun without --resume and "
+                + "with --force to start over", e.getMessage());
+    }
+
+    @Test
+    void aJournalOfTheFirstVersionIsRefusedByItsFormat(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("journal.jsonl");
+        Files.writeString(file, "{\"type\":\"start\",\"fingerprint\":\"telltale.audit/1|seed=1\"}\n");
+        TelltaleException e = assertThrows(TelltaleException.class, () -> Journal.resume(file, RUN_A));
+        assertEquals(file + ": not a telltale.journal version 2 journal (found an older journal without a format); "
+                + "rerun without --resume and with --force to start over", e.getMessage());
     }
 }
