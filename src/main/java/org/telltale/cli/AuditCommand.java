@@ -17,6 +17,7 @@ import org.telltale.audit.Policy;
 import org.telltale.audit.RunFingerprint;
 import org.telltale.audit.Severity;
 import org.telltale.explain.ExplainSettings;
+import org.telltale.explain.Target;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
 import org.telltale.connect.ModelIdentity;
@@ -92,7 +93,7 @@ final class AuditCommand implements Callable<Integer> {
         }
         OutputFolder folder = OutputFolder.open(out, force, resume);
         ExplainSettings explain = ExplainSettings.defaults().withWords(words).withProbes(probes).withSeed(seed)
-                .withAnalyzer(analyzer.spec());
+                .withAnalyzer(analyzer.spec()).withTarget(Target.PROBABILITY); // the audit's rules are set in probability
         Auditor.Progress progress = AuditProgressBar.forTerminal(quiet);
         Auditor.Outcome outcome;
         try (TextClassifier classifier = model.open()) {

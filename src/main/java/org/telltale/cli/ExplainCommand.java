@@ -18,6 +18,7 @@ import org.telltale.explain.ExplainSettings;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
 import org.telltale.explain.Selection;
+import org.telltale.explain.Target;
 import org.telltale.explain.Weighting;
 import org.telltale.model.TextClassifier;
 import org.telltale.report.html.HtmlReports;
@@ -52,15 +53,25 @@ final class ExplainCommand implements Callable<Integer> {
     Integer first;
     @Option(names = "--label", paramLabel = "NAME", description = "The label to explain (default: the predicted one).")
     String label;
-    @Option(names = "--words", paramLabel = "K", defaultValue = "10", description = "Units to report (default: ${DEFAULT-VALUE}).")
-    int words;
+    @Option(names = "--words", paramLabel = "K|all", defaultValue = "10",
+            description = "Units to report, or all: every unit, without selection (default: ${DEFAULT-VALUE}).")
+    String words;
     @Option(names = "--probes", paramLabel = "N|auto", defaultValue = "" + ExplainSettings.DEFAULT_PROBES,
-            description = "Probe budget, or auto: grow in rounds until the top units are stable (default: ${DEFAULT-VALUE}).")
+            description = "Probe budget, or auto: grow in rounds until the reported units are separated from the next one"
+                    + " at the interval level (default: ${DEFAULT-VALUE}).")
     String probes;
     @Option(names = "--unit", paramLabel = "KIND", defaultValue = "word", description = "word, occurrence or line (default: ${DEFAULT-VALUE}).")
     String unit;
-    @Option(names = "--select", paramLabel = "HOW", defaultValue = "auto", description = "auto, forward, lars, largest or none (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--select", paramLabel = "HOW", defaultValue = "forward",
+            description = "How the K units are chosen: forward (forward stepwise) or lasso (the lasso path by least angle"
+                    + " regression) (default: ${DEFAULT-VALUE}).")
     String select;
+    @Option(names = "--target", paramLabel = "WHAT", defaultValue = "auto",
+            description = "What the weights explain: probability, log-odds, or auto: log-odds when the model answers logits"
+                    + " or its scores are saturated (default: ${DEFAULT-VALUE}).")
+    String target;
+    @Option(names = "--split-half", description = "Also fit each half of the probes and report how far their top units agree.")
+    boolean splitHalf;
     @Option(names = "--bandwidth", paramLabel = "X", defaultValue = "" + ExplainSettings.DEFAULT_BANDWIDTH,
             description = "Sigma of the cosine kernel (default: ${DEFAULT-VALUE}; see docs/method.md).")
     double bandwidth;
@@ -140,11 +151,21 @@ final class ExplainCommand implements Callable<Integer> {
                 throw new UsageException("--probes must be auto or at least 2: " + probes);
             }
         }
+        int k;
+        if ("all".equals(words.strip().toLowerCase(Locale.ROOT))) {
+            k = ExplainSettings.ALL_UNITS;
+        } else {
+            try {
+                k = Integer.parseInt(words.strip());
+            } catch (NumberFormatException e) {
+                throw new UsageException("--words must be a number or all: " + words);
+            }
+        }
         try {
-            return ExplainSettings.defaults().withWords(words).withProbes(budget).withUnit(UnitKind.fromKey(unit))
-                    .withSelect(Selection.fromKey(select)).withBandwidth(bandwidth)
+            return ExplainSettings.defaults().withWords(k).withProbes(budget).withUnit(UnitKind.fromKey(unit))
+                    .withSelect(Selection.fromKey(select)).withTarget(Target.fromKey(target)).withBandwidth(bandwidth)
                     .withWeighting(Weighting.fromKey(weighting)).withAnalyzer(analyzer.spec()).withSeed(seed)
-                    .withFiller(filler);
+                    .withFiller(filler).withSplitHalf(splitHalf);
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());
         }

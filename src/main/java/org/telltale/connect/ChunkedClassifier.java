@@ -56,6 +56,7 @@ final class ChunkedClassifier implements TextClassifier {
         }
         int n = texts.size();
         double[][] rows = new double[n][];
+        double[][] logits = validator.kind() == ScoreKind.LOGITS ? new double[n][] : null; // kept for the explainer
         List<Future<?>> pending = new ArrayList<>((n + batch - 1) / batch);
         for (int offset = 0; offset < n; offset += batch) {
             int from = offset;
@@ -63,17 +64,21 @@ final class ChunkedClassifier implements TextClassifier {
             var place = new ResponseValidator.BatchPlace(from / batch + 1, from, to - from, ids, redactor);
             List<String> chunk = List.copyOf(texts.subList(from, to));
             pending.add(pool.submit(() -> {
-                double[][] part = scoreWithRetries(chunk, place);
+                double[][] partLogits = logits == null ? null : new double[chunk.size()][];
+                double[][] part = scoreWithRetries(chunk, place, partLogits);
                 System.arraycopy(part, 0, rows, from, part.length);
+                if (logits != null) {
+                    System.arraycopy(partLogits, 0, logits, from, partLogits.length);
+                }
                 return null;
             }));
         }
         awaitAll(pending);
         List<String> labels = validator.labels();
-        return new ScoreMatrix(labels == null ? List.of() : labels, rows);
+        return new ScoreMatrix(labels == null ? List.of() : labels, rows, logits);
     }
 
-    private double[][] scoreWithRetries(List<String> chunk, ResponseValidator.BatchPlace place) {
+    private double[][] scoreWithRetries(List<String> chunk, ResponseValidator.BatchPlace place, double[][] logits) {
         for (int attempt = 0; ; attempt++) {
             if (Thread.currentThread().isInterrupted()) {
                 throw new CancellationException();
@@ -102,7 +107,7 @@ final class ChunkedClassifier implements TextClassifier {
                 sleep(wait);
                 continue;
             }
-            return validator.validate(raw, chunk.size(), place);
+            return validator.validate(raw, chunk.size(), place, logits);
         }
     }
 

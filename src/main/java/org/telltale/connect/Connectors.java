@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.telltale.UsageException;
+import org.telltale.model.BuiltinModel;
 import org.telltale.model.ModelFile;
 import org.telltale.model.TextClassifier;
 
@@ -36,7 +37,9 @@ public final class Connectors {
     public static TextClassifier inProcess(TextClassifier model, ConnectorSettings settings) {
         noHeaders(settings, "a model in this process");
         String description = model.describe() + " (in process, " + options(settings) + ")";
-        return new ChunkedClassifier(new InProcessScorer(model), settings, Redactor.none(), description);
+        boolean logits = model instanceof BuiltinModel; // built-in models answer their log scores as logits
+        return new ChunkedClassifier(new InProcessScorer(model, logits), logits ? settings.withScores(ScoreKind.LOGITS) : settings,
+                Redactor.none(), description);
     }
 
     private static TextClassifier openFile(ConnectorSettings settings) {

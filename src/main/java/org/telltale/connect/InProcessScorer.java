@@ -6,19 +6,26 @@ import org.telltale.model.TextClassifier;
 
 /**
  * Scores a batch with a model in this JVM (a built-in model file). Its answers go through the same
- * validation as a remote model's, which costs little and catches a corrupt model file.
+ * validation as a remote model's, which costs little and catches a corrupt model file. With
+ * {@code logits}, it hands on the model's logits (built-in models have them), and the validator
+ * turns them into probabilities while keeping them for the explainer.
  */
 final class InProcessScorer implements BatchScorer {
     private final TextClassifier model;
+    private final boolean logits;
 
-    InProcessScorer(TextClassifier model) {
+    InProcessScorer(TextClassifier model, boolean logits) {
         this.model = model;
+        this.logits = logits;
     }
 
     @Override
     public RawScores score(List<String> texts) {
         ScoreMatrix m = model.score(texts);
-        return new RawScores(m.labels(), m.rows(), m.toString());
+        if (logits && !m.hasLogits()) {
+            throw new IllegalStateException(model.describe() + " answered no logits");
+        }
+        return new RawScores(m.labels(), logits ? m.logits() : m.rows(), m.toString());
     }
 
     @Override

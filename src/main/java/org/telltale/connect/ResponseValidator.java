@@ -36,6 +36,19 @@ final class ResponseValidator {
      * @param where names the batch and maps a row to a document for error messages
      */
     double[][] validate(RawScores raw, int expectedRows, BatchPlace where) {
+        return validate(raw, expectedRows, where, null);
+    }
+
+    /** The score kind this validator reads. */
+    ScoreKind kind() {
+        return kind;
+    }
+
+    /**
+     * As {@link #validate(RawScores, int, BatchPlace)}; when the answer is logits and
+     * {@code logitsOut} is given, it receives each row's logits in the fixed label order.
+     */
+    double[][] validate(RawScores raw, int expectedRows, BatchPlace where, double[][] logitsOut) {
         if (raw.rows().length != expectedRows) {
             throw where.error("the model answered " + raw.rows().length + " rows for " + expectedRows + " texts", raw);
         }
@@ -64,6 +77,9 @@ final class ResponseValidator {
                             + " and label '" + got.get(j) + "'", raw);
                 }
                 ordered[column[j]] = v;
+            }
+            if (kind == ScoreKind.LOGITS && logitsOut != null) {
+                logitsOut[r] = ordered;
             }
             out[r] = kind == ScoreKind.LOGITS ? Softmax.of(ordered) : checkProbabilities(ordered, r, where, raw);
         }

@@ -11,6 +11,7 @@ import org.telltale.audit.OutputFolder;
 import org.telltale.audit.Policy;
 import org.telltale.audit.RunFingerprint;
 import org.telltale.explain.ExplainSettings;
+import org.telltale.explain.Target;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
 import org.telltale.model.TextClassifier;
@@ -43,7 +44,7 @@ final class DemoAudit {
         AuditSettings audit = new AuditSettings(settings.sample(), settings.probes(), settings.words(), PICKS, true,
                 "never", AuditSettings.DEFAULT_ALPHA, BATCH, ANALYZER, null);
         ExplainSettings explain = ExplainSettings.defaults().withWords(settings.words()).withProbes(settings.probes())
-                .withSeed(settings.seed()).withAnalyzer(ANALYZER);
+                .withSeed(settings.seed()).withAnalyzer(ANALYZER).withTarget(Target.PROBABILITY);
         OutputFolder folder = OutputFolder.open(dir, true, false);
         String corpusName = corpus.getFileName().toString();
         // The demo never resumes; its fingerprint still says what decided the result.

@@ -6,11 +6,11 @@ import org.telltale.text.UnitKind;
 
 /**
  * How explanations are computed. Build from {@link #defaults()} and the {@code with…} methods;
- * every value is checked when the record is made.
+ * every value is checked when the record is made, and errors say which setting and which value.
  *
- * @param words      K, the number of units reported (before any {@code none} selection)
+ * @param words      K, the number of units reported, or {@link #ALL_UNITS} for every unit (no selection)
  * @param probes     the probe budget including probe 0, or {@link #AUTO} to grow it in rounds
- *                   until the top-K terms are stable
+ *                   until the reported units are separated (docs/method.md, "The adaptive budget")
  * @param probeCap   the most probes {@link #AUTO} may spend
  * @param unit       what one feature stands for
  * @param select     how the K units are chosen
@@ -20,9 +20,10 @@ import org.telltale.text.UnitKind;
  * @param seed       the run seed; each document's stream derives from it and the document id
  * @param filler     written in place of each removed span ("" cuts cleanly)
  * @param ridge      λ of the ridge penalty on the slopes of a sampled fit (exact fits use none)
- * @param bootstrap  bootstrap resamples for the weight intervals (0 for none)
  * @param level      the coverage of the weight intervals, e.g. 0.95
- * @param stabilityTarget the split-half agreement at which {@link #AUTO} stops
+ * @param target     what the surrogate is fitted to: probability, log-odds, or chosen per document
+ * @param sampling   how the number of removed units of a drawn probe is chosen
+ * @param splitHalf  also fit each half of the probes and report their agreement (two extra fits)
  * @param maxUnits   the most units one explanation covers; a longer document keeps its most
  *                   frequent words (or first occurrences or lines) and says so in a note
  */
@@ -38,13 +39,16 @@ public record ExplainSettings(
         long seed,
         String filler,
         double ridge,
-        int bootstrap,
         double level,
-        double stabilityTarget,
+        Target target,
+        Sampling sampling,
+        boolean splitHalf,
         int maxUnits) {
 
     /** The {@link #probes} value that asks for the adaptive budget. */
     public static final int AUTO = 0;
+    /** The {@link #words} value that reports every unit, without selection. */
+    public static final int ALL_UNITS = Integer.MAX_VALUE;
     /** The fixed budget used unless asked otherwise. */
     public static final int DEFAULT_PROBES = 2000;
     /** σ = 0.25: see docs/method.md, "Kernels", for why. */
@@ -57,44 +61,46 @@ public record ExplainSettings(
         Objects.requireNonNull(select, "select");
         Objects.requireNonNull(weighting, "weighting");
         Objects.requireNonNull(analyzer, "analyzer");
+        Objects.requireNonNull(target, "target");
+        Objects.requireNonNull(sampling, "sampling");
         filler = filler == null ? "" : filler;
         if (words < 1) {
-            throw new UsageException("--words must be at least 1: " + words);
+            throw new UsageException("words must be at least 1: " + words);
         }
         if (probes != AUTO && probes < 2) {
-            throw new UsageException("--probes must be auto or at least 2: " + probes);
+            throw new UsageException("probes must be auto or at least 2: " + probes);
         }
         if (probeCap < 2) {
-            throw new UsageException("the probe cap must be at least 2: " + probeCap);
+            throw new UsageException("probe cap must be at least 2: " + probeCap);
         }
         if (!(bandwidth > 0) || Double.isInfinite(bandwidth)) {
-            throw new UsageException("--bandwidth must be a positive number: " + bandwidth);
+            throw new UsageException("bandwidth must be a positive number: " + bandwidth);
         }
         if (!(ridge >= 0) || Double.isInfinite(ridge)) {
-            throw new UsageException("the ridge penalty must be zero or positive: " + ridge);
-        }
-        if (bootstrap < 0) {
-            throw new UsageException("bootstrap resamples must be zero or positive: " + bootstrap);
+            throw new UsageException("ridge penalty must be zero or positive: " + ridge);
         }
         if (!(level > 0 && level < 1)) {
-            throw new UsageException("the interval level must lie strictly between 0 and 1: " + level);
+            throw new UsageException("interval level must lie strictly between 0 and 1: " + level);
         }
         if (maxUnits < 1) {
-            throw new UsageException("the unit cap must be at least 1: " + maxUnits);
-        }
-        if (!(stabilityTarget > 0 && stabilityTarget <= 1)) {
-            throw new UsageException("the stability target must lie in (0, 1]: " + stabilityTarget);
+            throw new UsageException("unit cap must be at least 1: " + maxUnits);
         }
     }
 
-    /** Ten words, 2,000 probes, word units, automatic selection, σ = 0.25, cosine kernel, seed 1. */
+    /** Ten words, 2,000 probes, word units, forward selection, σ = 0.25, cosine kernel, seed 1. */
     public static ExplainSettings defaults() {
-        return new ExplainSettings(10, DEFAULT_PROBES, 4000, UnitKind.WORD, Selection.AUTO, DEFAULT_BANDWIDTH,
-                Weighting.COSINE, "standard", 1L, "", 1.0, 200, 0.95, 0.9, DEFAULT_MAX_UNITS);
+        return new ExplainSettings(10, DEFAULT_PROBES, 4000, UnitKind.WORD, Selection.FORWARD, DEFAULT_BANDWIDTH,
+                Weighting.COSINE, "standard", 1L, "", 1.0, 0.95, Target.AUTO, Sampling.UNIFORM, false,
+                DEFAULT_MAX_UNITS);
     }
 
     public boolean adaptive() {
         return probes == AUTO;
+    }
+
+    /** True when every unit is reported and no selection runs. */
+    public boolean allUnits() {
+        return words == ALL_UNITS;
     }
 
     /** The most probes this explanation may spend. */
@@ -103,77 +109,66 @@ public record ExplainSettings(
     }
 
     public ExplainSettings withWords(int v) {
-        return new ExplainSettings(v, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(v, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withProbes(int v) {
-        return new ExplainSettings(words, v, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, v, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withProbeCap(int v) {
-        return new ExplainSettings(words, probes, v, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, probes, v, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withUnit(UnitKind v) {
-        return new ExplainSettings(words, probes, probeCap, v, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, v, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withSelect(Selection v) {
-        return new ExplainSettings(words, probes, probeCap, unit, v, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, v, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withBandwidth(double v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, v, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, v, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withWeighting(Weighting v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, v, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, v, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withAnalyzer(String v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, v, seed, filler,
-                ridge, bootstrap, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, v, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withSeed(long v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, v, filler,
-                ridge, bootstrap, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, v, filler, ridge, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withFiller(String v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, v,
-                ridge, bootstrap, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, v, ridge, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withRidge(double v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                v, bootstrap, level, stabilityTarget, maxUnits);
-    }
-
-    public ExplainSettings withBootstrap(int v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, v, level, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, v, level, target, sampling, splitHalf, maxUnits);
     }
 
     public ExplainSettings withLevel(double v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, v, stabilityTarget, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, v, target, sampling, splitHalf, maxUnits);
     }
 
-    public ExplainSettings withStabilityTarget(double v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, v, maxUnits);
+    public ExplainSettings withTarget(Target v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, v, sampling, splitHalf, maxUnits);
+    }
+
+    public ExplainSettings withSampling(Sampling v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, v, splitHalf, maxUnits);
+    }
+
+    public ExplainSettings withSplitHalf(boolean v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, v, maxUnits);
     }
 
     public ExplainSettings withMaxUnits(int v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler,
-                ridge, bootstrap, level, stabilityTarget, v);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, v);
     }
 }

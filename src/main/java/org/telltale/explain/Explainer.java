@@ -26,7 +26,7 @@ import org.telltale.text.Unit;
  * order or the thread that explains it.
  */
 public final class Explainer {
-    /** The first round of an adaptive budget, probe 0 included. */
+    /** The first round of an adaptive budget, probe 0 included; later rounds add at least as many. */
     static final int FIRST_ROUND = 250;
     /** Enumeration is limited to 2^MAX_EXACT_UNITS subsets whatever the budget. */
     static final int MAX_EXACT_UNITS = 20;
@@ -64,10 +64,11 @@ public final class Explainer {
         }
         ProbeRandom random = ProbeRandom.forDocument(settings.seed(), doc.id());
         ProbeRandom sampling = random.split();
-        ProbeRandom resampling = random.split();
         ProbeSet probes = new ProbeSet(doc.id(), index, masker, classifier);
         boolean shapley = settings.weighting() == Weighting.SHAPLEY;
         boolean exact = d <= MAX_EXACT_UNITS && (1L << d) <= settings.budget();
+        double[] counts = settings.sampling() == Sampling.KERNEL && d > 0
+                ? ProbeSampler.matchedCounts(fitter.kernel(), d) : null;
 
         List<BitSet> fixed = new ArrayList<>();
         fixed.add(new BitSet());
@@ -81,52 +82,70 @@ public final class Explainer {
             }
             int first = settings.adaptive() ? Math.min(FIRST_ROUND, settings.probeCap()) : settings.probes();
             List<BitSet> round = new ArrayList<>(fixed);
-            round.addAll(ProbeSampler.draw(d, Math.max(0, first - fixed.size()), sampling));
+            round.addAll(ProbeSampler.draw(d, Math.max(0, first - fixed.size()), counts, sampling));
             probes.add(round);
         }
         int labelColumn = labelColumn(doc, probes, labelOrNull);
         String label = probes.labels().get(labelColumn);
         int draws = Math.max(1, settings.budget() - 1);
+        Target target = TargetValues.resolve(settings.target(), probes.hasLogits(),
+                TargetValues.saturatedShare(probes, labelColumn), probes.labels());
+        int k = settings.words();
+        double resolution = target == Target.LOG_ODDS ? LOG_ODDS_RESOLUTION : PROBABILITY_RESOLUTION;
 
-        double stability;
+        double stability = Double.NaN;
+        int toGo = -1;
         Surrogate surrogate;
         if (d == 0) {
             notes.add("the analyzer found no units in this document; nothing to explain");
-            stability = Double.NaN;
             surrogate = null;
         } else if (exact) {
             notes.add("exact: all " + (1L << d) + " subsets of " + d + " units were enumerated once;"
                     + " the weights carry no sampling uncertainty");
-            stability = 1.0;
-            surrogate = fitter.fit(d, probes.rows(), probes.column(labelColumn), true, draws, null);
+            stability = settings.splitHalf() ? 1.0 : Double.NaN;
+            surrogate = fitter.fit(d, probes.rows(), TargetValues.column(probes, labelColumn, target), true, draws);
         } else {
-            stability = stability(d, probes, labelColumn, fixed.size());
-            while (settings.adaptive() && stability < settings.stabilityTarget() && probes.size() < settings.probeCap()) {
-                int next = Math.min(settings.probeCap(), 2 * probes.size());
-                probes.add(ProbeSampler.draw(d, next - probes.size(), sampling));
-                stability = stability(d, probes, labelColumn, fixed.size());
+            SurrogateFit.Design design = fitter.design(d, probes.rows(),
+                    TargetValues.column(probes, labelColumn, target), false, draws);
+            Separation.Verdict verdict = verdict(design, k, resolution);
+            while (settings.adaptive() && !verdict.settled() && probes.size() < settings.probeCap()) {
+                int n = probes.size();
+                double wanted = Double.isFinite(verdict.probesNeeded()) ? 1.1 * verdict.probesNeeded() : 2.0 * n;
+                int next = (int) Math.min(settings.probeCap(), Math.max(n + FIRST_ROUND, Math.min(4.0 * n, wanted)));
+                probes.add(ProbeSampler.draw(d, next - n, counts, sampling));
+                design = fitter.design(d, probes.rows(), TargetValues.column(probes, labelColumn, target), false, draws);
+                verdict = verdict(design, k, resolution);
             }
-            if (settings.adaptive() && stability < settings.stabilityTarget()) {
+            toGo = verdict.settled() ? 0 : Double.isFinite(verdict.probesNeeded())
+                    ? (int) Math.min(Integer.MAX_VALUE, Math.ceil(verdict.probesNeeded() - probes.size())) : -1;
+            if (settings.adaptive() && !verdict.settled()) {
                 notes.add(String.format(java.util.Locale.ROOT,
-                        "the probe cap of %d was reached before the top terms were stable (split-half agreement %.2f, target %.2f)",
-                        settings.probeCap(), stability, settings.stabilityTarget()));
+                        "the probe cap of %d was reached before the reported units were separated from the next one%s",
+                        settings.probeCap(), toGo > 0 ? String.format(java.util.Locale.ROOT,
+                                " (about %d more probes would be needed)", toGo) : ""));
             }
-            surrogate = fitter.fit(d, probes.rows(), probes.column(labelColumn), false, draws, resampling);
+            surrogate = fitter.fitUnits(design, fitter.select(design, k));
+            if (settings.splitHalf()) {
+                stability = stability(d, probes, TargetValues.column(probes, labelColumn, target), fixed.size());
+            }
         }
 
         double[] original = probes.scores(0);
+        double targetValue = TargetValues.value(probes, 0, labelColumn, target, probes.hasLogits());
+        double saturated = TargetValues.saturatedShare(probes, labelColumn);
+        String source = target != Target.LOG_ODDS ? "probabilities"
+                : probes.hasLogits() ? "logits" : "clipped probabilities";
+        saturationNotes(notes, target, source, saturated, settings.target());
         Map<String, Double> scores = new LinkedHashMap<>();
         for (int j = 0; j < original.length; j++) {
             scores.put(probes.labels().get(j), original[j]);
         }
         List<Explanation.TermWeight> terms = new ArrayList<>();
         Explanation.Fit fit;
-        int resamples = 0;
         if (surrogate == null) {
-            fit = new Explanation.Fit(original[labelColumn], 1.0, original[labelColumn]);
+            fit = new Explanation.Fit(targetValue, 1.0, targetValue);
         } else {
             fit = new Explanation.Fit(surrogate.intercept(), surrogate.r2(), surrogate.prediction());
-            resamples = surrogate.resamples();
             List<Unit> units = index.units();
             for (int i = 0; i < surrogate.units().length; i++) {
                 Unit unit = units.get(surrogate.units()[i]);
@@ -136,16 +155,49 @@ public final class Explainer {
             terms.sort(Comparator.comparingDouble((Explanation.TermWeight t) -> -Math.abs(t.weight()))
                     .thenComparing(t -> t.spans().isEmpty() ? 0 : t.spans().get(0).start()));
         }
+        String selection = settings.allUnits() ? "all" : settings.select().key();
         Explanation.Method method = new Explanation.Method(settings.unit().key(), settings.weighting().key(),
-                settings.select().key(), settings.bandwidth(), settings.ridge(), settings.words(), settings.seed(),
-                settings.analyzer(), settings.filler(), settings.level(), d, probes.calls(), exact, stability,
-                resamples, notes);
+                selection, settings.bandwidth(), settings.ridge(), settings.allUnits() ? d : settings.words(),
+                settings.seed(), settings.analyzer(), settings.filler(), settings.level(), d, probes.calls(), exact,
+                stability, exact || d == 0 ? "exact" : "sandwich", target.key(), source, targetValue, saturated, toGo,
+                settings.sampling().key(), notes);
         long total = (System.nanoTime() - start) / 1_000_000;
         return new Explanation(doc.id(), label, original[labelColumn], predicted(original, probes.labels()),
                 scores, probes.size(), fit, terms, new Explanation.Timing(probes.modelMillis(), total), doc.text(),
                 doc.label(), method);
     }
 
+    /** Effects below these are negligible for the stopping rule: half a percentage point, 0.05 in log-odds. */
+    static final double PROBABILITY_RESOLUTION = 0.005;
+    static final double LOG_ODDS_RESOLUTION = 0.05;
+
+    /** Whether the K reported units stand apart from the next one: one fit on K + 1 units. */
+    private Separation.Verdict verdict(SurrogateFit.Design design, int k, double resolution) {
+        int[] chosen = fitter.select(design, k >= design.d ? k : k + 1);
+        int reported = Math.min(k, chosen.length);
+        Surrogate fit = fitter.fitUnits(design, chosen);
+        return Separation.of(fit, reported, fitter.z(), resolution, design.rows());
+    }
+
+    private static void saturationNotes(List<String> notes, Target target, String source, double saturated,
+            Target asked) {
+        if (saturated <= TargetValues.SATURATED_SHARE) {
+            return;
+        }
+        String share = String.format(java.util.Locale.ROOT, "%.0f %%", 100 * saturated);
+        if (target == Target.PROBABILITY) {
+            notes.add("saturated scores: " + share + " of the probes scored within 1e-6 of 0 or 1, so the"
+                    + " probability hardly moves and its explanation shows little; explain the log-odds"
+                    + " (target log-odds), best with the model's logits exposed to Telltale");
+        } else if ("clipped probabilities".equals(source)) {
+            notes.add("saturated scores: " + share + " of the probes scored within 1e-6 of 0 or 1; the log-odds"
+                    + " were computed from probabilities clipped to [1e-12, 1 - 1e-12], which hides what lies"
+                    + " beyond; expose the model's logits to Telltale for a faithful explanation");
+        } else {
+            notes.add("saturated scores: " + share + " of the probes scored within 1e-6 of 0 or 1; explained"
+                    + " through the model's logits, which keep what the probabilities round away");
+        }
+    }
     private static int labelColumn(Document doc, ProbeSet probes, String labelOrNull) {
         List<String> labels = probes.labels();
         if (labelOrNull == null) {
@@ -174,9 +226,8 @@ public final class Explainer {
      * probes go to both), a surrogate is fitted on each, and the result is the share of the top
      * K terms (by absolute weight) that both halves select with the same sign.
      */
-    private double stability(int d, ProbeSet probes, int labelColumn, int fixedCount) {
+    private double stability(int d, ProbeSet probes, double[] y, int fixedCount) {
         List<BitSet> rows = probes.rows();
-        double[] y = probes.column(labelColumn);
         List<BitSet> a = new ArrayList<>();
         List<BitSet> b = new ArrayList<>();
         List<Double> ya = new ArrayList<>();
@@ -193,8 +244,8 @@ public final class Explainer {
                 yb.add(y[i]);
             }
         }
-        Surrogate sa = fitter.fit(d, a, ya.stream().mapToDouble(Double::doubleValue).toArray(), false, 1, null);
-        Surrogate sb = fitter.fit(d, b, yb.stream().mapToDouble(Double::doubleValue).toArray(), false, 1, null);
+        Surrogate sa = fitter.fit(d, a, ya.stream().mapToDouble(Double::doubleValue).toArray(), false, 1);
+        Surrogate sb = fitter.fit(d, b, yb.stream().mapToDouble(Double::doubleValue).toArray(), false, 1);
         return agreement(sa, sb, settings.words());
     }
 

@@ -50,28 +50,48 @@ public record Explanation(
     /**
      * How an explanation was computed and what the run observed.
      *
-     * @param unit       {@code word}, {@code occurrence} or {@code line}
-     * @param weighting  {@code cosine} or {@code shapley}
-     * @param selection  the selection asked for ({@code auto}, {@code forward}, …)
-     * @param bandwidth  σ of the cosine kernel
-     * @param ridge      λ of the ridge penalty in sampled cosine fits
-     * @param words      K asked for
-     * @param seed       the run seed
-     * @param analyzer   the analyzer name
-     * @param filler     the text written in place of removed spans
-     * @param level      the interval coverage, e.g. 0.95
-     * @param units      d, the number of units of the document (after any cap)
-     * @param calls      distinct texts sent to the model (probes minus repeats)
-     * @param exact      true when every subset of units was enumerated
-     * @param stability  split-half agreement of the top terms and signs, NaN when not measured
-     * @param resamples  bootstrap resamples behind the intervals (0 when exact)
-     * @param notes      plain-language remarks on this explanation (caps, degenerate fits, …)
+     * @param unit        {@code word}, {@code occurrence} or {@code line}
+     * @param weighting   {@code cosine} or {@code shapley}
+     * @param selection   the selection used: {@code forward}, {@code lasso}, or {@code all} (none)
+     * @param bandwidth   σ of the cosine kernel
+     * @param ridge       λ of the ridge penalty in sampled cosine fits
+     * @param words       K asked for (the number of units when {@code selection} is {@code all})
+     * @param seed        the run seed
+     * @param analyzer    the analyzer name
+     * @param filler      the text written in place of removed spans
+     * @param level       the interval coverage, e.g. 0.95
+     * @param units       d, the number of units of the document (after any cap)
+     * @param calls       distinct texts sent to the model (probes minus repeats)
+     * @param exact       true when every subset of units was enumerated
+     * @param stability   split-half agreement of the top terms and signs, NaN when not asked for
+     * @param interval    how the intervals were formed: {@code sandwich}, or {@code exact} (zero width)
+     * @param target      what the surrogate explains: {@code probability} or {@code log-odds}
+     * @param source      where the target came from: {@code probabilities}, {@code logits} or
+     *                    {@code clipped probabilities}
+     * @param targetValue the target at the original document
+     * @param saturated   the share of probes whose probability lay within 1e-6 of 0 or 1
+     * @param probesToGo  0 when the reported units are separated from the next one at the interval
+     *                    level; otherwise an estimate of the further probes that would separate
+     *                    them, -1 when no estimate is possible (exact, or no separation in sight)
+     * @param sampling    how removed counts were drawn: {@code uniform} or {@code kernel}
+     * @param notes       plain-language remarks on this explanation (caps, saturation, …)
      */
     public record Method(String unit, String weighting, String selection, double bandwidth, double ridge,
             int words, long seed, String analyzer, String filler, double level, int units, int calls,
-            boolean exact, double stability, int resamples, List<String> notes) {
+            boolean exact, double stability, String interval, String target, String source, double targetValue,
+            double saturated, int probesToGo, String sampling, List<String> notes) {
         public Method {
             notes = List.copyOf(notes);
+        }
+
+        /** True when the explained target is the log-odds of the label. */
+        public boolean logOdds() {
+            return "log-odds".equals(target);
+        }
+
+        /** True when most probes scored within 1e-6 of 0 or 1. */
+        public boolean isSaturated() {
+            return saturated > 0.5;
         }
     }
 

@@ -10,36 +10,41 @@ import java.util.List;
  * stay within a few megabytes.
  */
 public final class PresenceMatrix implements Columns {
-    private final long[][] bits;
+    private final long[] bits; // row-major, `stride` words per row: one array, not one per probe
+    private final int stride;
+    private final int rows;
     private final int units;
 
-    private PresenceMatrix(long[][] bits, int units) {
+    private PresenceMatrix(long[] bits, int stride, int rows, int units) {
         this.bits = bits;
+        this.stride = stride;
+        this.rows = rows;
         this.units = units;
     }
 
     /** The presence matrix of probes given by the units each removes. */
     public static PresenceMatrix fromRemoved(List<BitSet> removed, int units) {
         int words = (units + 63) >>> 6;
-        long[][] bits = new long[removed.size()][];
-        for (int i = 0; i < bits.length; i++) {
-            long[] row = new long[words];
-            Arrays.fill(row, -1L);
-            if ((units & 63) != 0 && words > 0) {
-                row[words - 1] = (1L << (units & 63)) - 1;
+        int n = removed.size();
+        long[] bits = new long[n * words];
+        long last = (units & 63) == 0 ? -1L : (1L << (units & 63)) - 1;
+        for (int i = 0; i < n; i++) {
+            int base = i * words;
+            Arrays.fill(bits, base, base + words, -1L);
+            if (words > 0) {
+                bits[base + words - 1] = last;
             }
-            long[] cut = removed.get(i).toLongArray();
-            for (int w = 0; w < Math.min(cut.length, words); w++) {
-                row[w] &= ~cut[w];
+            BitSet cut = removed.get(i);
+            for (int j = cut.nextSetBit(0); j >= 0 && j < units; j = cut.nextSetBit(j + 1)) {
+                bits[base + (j >>> 6)] &= ~(1L << (j & 63));
             }
-            bits[i] = row;
         }
-        return new PresenceMatrix(bits, units);
+        return new PresenceMatrix(bits, words, n, units);
     }
 
     @Override
     public int rows() {
-        return bits.length;
+        return rows;
     }
 
     @Override
@@ -48,14 +53,14 @@ public final class PresenceMatrix implements Columns {
     }
 
     public boolean present(int row, int unit) {
-        return (bits[row][unit >>> 6] >>> (unit & 63) & 1L) != 0;
+        return (bits[row * stride + (unit >>> 6)] >>> (unit & 63) & 1L) != 0;
     }
 
     /** The number of units probe {@code row} keeps. */
     public int presentCount(int row) {
         int n = 0;
-        for (long w : bits[row]) {
-            n += Long.bitCount(w);
+        for (int w = row * stride, end = w + stride; w < end; w++) {
+            n += Long.bitCount(bits[w]);
         }
         return n;
     }
@@ -63,14 +68,14 @@ public final class PresenceMatrix implements Columns {
     @Override
     public void transposeTimes(double[] v, double[] out) {
         Arrays.fill(out, 0, units, 0.0);
-        for (int i = 0; i < bits.length; i++) {
+        for (int i = 0; i < rows; i++) {
             double vi = v[i];
             if (vi == 0.0) {
                 continue;
             }
-            long[] row = bits[i];
-            for (int w = 0; w < row.length; w++) {
-                long word = row[w];
+            int row = i * stride;
+            for (int w = 0; w < stride; w++) {
+                long word = bits[row + w];
                 int base = w << 6;
                 while (word != 0) {
                     out[base + Long.numberOfTrailingZeros(word)] += vi;
@@ -82,11 +87,11 @@ public final class PresenceMatrix implements Columns {
 
     @Override
     public void times(double[] b, double[] out) {
-        for (int i = 0; i < bits.length; i++) {
-            long[] row = bits[i];
+        for (int i = 0; i < rows; i++) {
+            int row = i * stride;
             double s = 0;
-            for (int w = 0; w < row.length; w++) {
-                long word = row[w];
+            for (int w = 0; w < stride; w++) {
+                long word = bits[row + w];
                 int base = w << 6;
                 while (word != 0) {
                     s += b[base + Long.numberOfTrailingZeros(word)];
@@ -99,8 +104,10 @@ public final class PresenceMatrix implements Columns {
 
     @Override
     public void column(int j, double[] out) {
-        for (int i = 0; i < bits.length; i++) {
-            out[i] = present(i, j) ? 1.0 : 0.0;
+        int word = j >>> 6;
+        int shift = j & 63;
+        for (int i = 0; i < rows; i++) {
+            out[i] = (bits[i * stride + word] >>> shift & 1L);
         }
     }
 }

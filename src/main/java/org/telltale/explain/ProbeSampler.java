@@ -17,7 +17,71 @@ public final class ProbeSampler {
 
     /** The units one random probe of a d-unit document removes. */
     public static BitSet draw(int d, ProbeRandom random) {
-        int size = 1 + random.nextInt(d);
+        return subset(d, 1 + random.nextInt(d), random);
+    }
+
+    /**
+     * The units one probe removes when the removed count k is drawn from {@code cumulative}
+     * (cumulative[k − 1] = P(count ≤ k), k = 1..d) instead of uniformly; the subset of that size is
+     * uniform as before.
+     */
+    public static BitSet draw(int d, double[] cumulative, ProbeRandom random) {
+        double u = random.nextDouble() * cumulative[d - 1];
+        int lo = 0;
+        int hi = d - 1;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (cumulative[mid] > u) {
+                hi = mid;
+            } else {
+                lo = mid + 1;
+            }
+        }
+        return subset(d, lo + 1, random);
+    }
+
+    /**
+     * The removed-count distribution matched to a kernel: P(k) ∝ the kernel's weight of a probe
+     * that removes k of d units (counts the kernel turns into constraints get none), as a
+     * cumulative array for {@link #draw(int, double[], ProbeRandom)}.
+     */
+    public static double[] matchedCounts(Kernel kernel, int d) {
+        double[] c = new double[d];
+        double sum = 0;
+        for (int k = 1; k <= d; k++) {
+            sum += kernel.constrains(d, k) ? 0 : kernel.sampled(d, k);
+            c[k - 1] = sum;
+        }
+        return c;
+    }
+
+    /**
+     * The weight each probe drawn from {@link #matchedCounts} carries so that the fit estimates the
+     * same weighted regression as uniform counts with kernel weights: the kernel's mean weight
+     * over the counts 1..d, Σ_k π(k) / d.
+     */
+    public static double meanWeight(Kernel kernel, int d) {
+        double sum = 0;
+        for (int k = 1; k <= d; k++) {
+            sum += kernel.constrains(d, k) ? 0 : kernel.sampled(d, k);
+        }
+        return sum / d;
+    }
+
+    /** {@code count} probes with removed counts from {@code cumulative} (null: uniform counts). */
+    public static List<BitSet> draw(int d, int count, double[] cumulative, ProbeRandom random) {
+        if (cumulative == null) {
+            return draw(d, count, random);
+        }
+        List<BitSet> out = new ArrayList<>(count);
+        for (int i = 0; i < count; i++) {
+            out.add(draw(d, cumulative, random));
+        }
+        return out;
+    }
+
+    /** A subset of {@code size} of d units, uniform among all such subsets (Floyd's algorithm). */
+    private static BitSet subset(int d, int size, ProbeRandom random) {
         BitSet removed = new BitSet(d);
         for (int j = d - size; j < d; j++) {
             int t = random.nextInt(j + 1);

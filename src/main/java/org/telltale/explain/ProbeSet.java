@@ -35,6 +35,8 @@ final class ProbeSet {
     private final List<Integer> rowScores = new ArrayList<>();
     private final Map<BitSet, Integer> byMask = new HashMap<>();
     private final List<double[]> scores = new ArrayList<>();
+    private final List<double[]> logits = new ArrayList<>();
+    private boolean withLogits = true;
     private List<String> labels;
     private long modelNanos;
 
@@ -96,8 +98,12 @@ final class ProbeSet {
                 throw new ClassifierException("document " + documentId + ": the model changed its labels from "
                         + labels + " to " + answer.labels());
             }
+            // The rows are the answer's own: a connector builds a fresh matrix per call, so no copy.
+            double[][] rows = answer.rows();
+            withLogits &= answer.hasLogits();
             for (int i = 0; i < texts.size(); i++) {
-                scores.add(answer.row(i));
+                scores.add(rows[i]);
+                logits.add(answer.hasLogits() ? answer.logits()[i] : null);
             }
         }
         for (int i = 0; i < rowScores.size(); i++) {
@@ -129,6 +135,16 @@ final class ProbeSet {
     /** The model's scores for every label on probe {@code row}. */
     double[] scores(int row) {
         return scores.get(rowScores.get(row));
+    }
+
+    /** True when every answer so far came with the model's logits. */
+    boolean hasLogits() {
+        return withLogits && !scores.isEmpty();
+    }
+
+    /** The model's logits on probe {@code row}; only when {@link #hasLogits()}. */
+    double[] logits(int row) {
+        return logits.get(rowScores.get(row));
     }
 
     /** The score of label column {@code label} for every probe, in row order. */

@@ -2,30 +2,32 @@ package org.telltale.explain;
 
 import java.util.Locale;
 
-/** How the K reported units are chosen before the weighted refit. */
+/**
+ * How the K reported units are chosen before the weighted refit. Reporting every unit, without a
+ * selection, is asked for by {@code --words all} ({@link ExplainSettings#ALL_UNITS}), not here.
+ */
 public enum Selection {
-    /** {@code none} when there are at most K units, {@code forward} otherwise. */
-    AUTO,
-    /** Greedy forward selection by residual reduction. */
-    FORWARD,
-    /** The first K variables to enter the lasso path (K-LASSO). */
-    LARS,
-    /** The K largest absolute weights of a ridge fit on all units. */
-    LARGEST,
-    /** Every unit. */
-    NONE;
+    /** Forward stepwise selection: add the unit that most reduces the weighted residual sum of squares. */
+    FORWARD("forward"),
+    /** The first K units to enter the lasso path, computed by least angle regression. */
+    LASSO("lasso");
+
+    private final String key;
+
+    Selection(String key) {
+        this.key = key;
+    }
 
     public String key() {
-        return name().toLowerCase(Locale.ROOT);
+        return key;
     }
 
     public static Selection fromKey(String key) {
         for (Selection s : values()) {
-            if (s.key().equals(key.toLowerCase(Locale.ROOT))) {
+            if (s.key.equals(key.strip().toLowerCase(Locale.ROOT))) {
                 return s;
             }
         }
-        throw new IllegalArgumentException(
-                "unknown selection '" + key + "' (expected auto, forward, lars, largest or none)");
+        throw new IllegalArgumentException("selection must be forward or lasso: " + key);
     }
 }

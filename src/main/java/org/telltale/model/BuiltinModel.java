@@ -78,13 +78,16 @@ public abstract sealed class BuiltinModel implements TextClassifier permits Naiv
         return Softmax.of(logScores(text));
     }
 
+    /** Probabilities, with the log scores behind them as logits (the softmax of each logit row is its probability row). */
     @Override
     public ScoreMatrix score(List<String> texts) {
         double[][] rows = new double[texts.size()][];
+        double[][] logits = new double[texts.size()][];
         for (int i = 0; i < rows.length; i++) {
-            rows[i] = probabilities(texts.get(i));
+            logits[i] = logScores(texts.get(i));
+            rows[i] = Softmax.of(logits[i]);
         }
-        return new ScoreMatrix(labels, rows);
+        return new ScoreMatrix(labels, rows, logits);
     }
 
     @Override

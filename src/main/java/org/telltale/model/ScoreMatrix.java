@@ -6,9 +6,11 @@ import java.util.List;
 /**
  * What a classifier answers for a batch: one row of scores per text, in the order the texts were
  * sent, one column per label. Scores are probabilities (rows sum to 1) once a connector has
- * validated and, for logits, normalised them.
+ * validated and, for logits, normalised them. When the model answered logits (the built-in models
+ * always do), {@code logits} keeps them beside the probabilities, row for row: a saturated
+ * probability of 1.0 still has a finite, informative logit. Otherwise {@code logits} is null.
  */
-public record ScoreMatrix(List<String> labels, double[][] rows) {
+public record ScoreMatrix(List<String> labels, double[][] rows, double[][] logits) {
     public ScoreMatrix {
         labels = List.copyOf(labels);
         for (double[] row : rows) {
@@ -16,6 +18,31 @@ public record ScoreMatrix(List<String> labels, double[][] rows) {
                 throw new IllegalArgumentException("row of " + row.length + " scores for " + labels.size() + " labels");
             }
         }
+        if (logits != null) {
+            if (logits.length != rows.length) {
+                throw new IllegalArgumentException(logits.length + " rows of logits for " + rows.length + " rows of scores");
+            }
+            for (double[] row : logits) {
+                if (row.length != labels.size()) {
+                    throw new IllegalArgumentException("row of " + row.length + " logits for " + labels.size() + " labels");
+                }
+            }
+        }
+    }
+
+    /** Probabilities only. */
+    public ScoreMatrix(List<String> labels, double[][] rows) {
+        this(labels, rows, null);
+    }
+
+    /** True when the model's logits came with its probabilities. */
+    public boolean hasLogits() {
+        return logits != null;
+    }
+
+    /** A copy of one row of logits; only when {@link #hasLogits()}. */
+    public double[] logitRow(int row) {
+        return logits[row].clone();
     }
 
     public int size() {
@@ -50,16 +77,17 @@ public record ScoreMatrix(List<String> labels, double[][] rows) {
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof ScoreMatrix m && labels.equals(m.labels) && Arrays.deepEquals(rows, m.rows);
+        return o instanceof ScoreMatrix m && labels.equals(m.labels) && Arrays.deepEquals(rows, m.rows)
+                && Arrays.deepEquals(logits, m.logits);
     }
 
     @Override
     public int hashCode() {
-        return 31 * labels.hashCode() + Arrays.deepHashCode(rows);
+        return 31 * (31 * labels.hashCode() + Arrays.deepHashCode(rows)) + Arrays.deepHashCode(logits);
     }
 
     @Override
     public String toString() {
-        return "ScoreMatrix[labels=" + labels + ", rows=" + rows.length + "]";
+        return "ScoreMatrix[labels=" + labels + ", rows=" + rows.length + (logits == null ? "" : ", with logits") + "]";
     }
 }

@@ -2,6 +2,7 @@ package org.telltale.audit;
 
 import java.nio.file.Path;
 import org.telltale.explain.ExplainSettings;
+import org.telltale.explain.Target;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
 import org.telltale.model.TextClassifier;
@@ -34,7 +35,7 @@ final class AuditRuns {
     static Auditor.Outcome run(TextClassifier model, Path corpus, AuditSettings settings, long seed, Policy policy,
             Path dir) {
         ExplainSettings explain = ExplainSettings.defaults().withWords(settings.words()).withProbes(settings.probes())
-                .withSeed(seed).withBootstrap(0).withAnalyzer(settings.analyzer());
+                .withSeed(seed).withAnalyzer(settings.analyzer()).withTarget(Target.PROBABILITY);
         Explainer explainer = new Explainer(model, explain);
         Auditor auditor = new Auditor(model, d -> explainer.explain(d, null), CODEC, Analyzers.byName(settings.analyzer()),
                 settings, seed, policy, Auditor.Progress.SILENT);

@@ -58,7 +58,7 @@ public final class FaithfulnessBench {
     }
 
     private static void run(String name, TextClassifier model, List<Document> docs, Gold gold) {
-        ExplainSettings base = ExplainSettings.defaults().withWords(K).withBootstrap(0);
+        ExplainSettings base = ExplainSettings.defaults().withWords(K);
         Map<Integer, List<Explanation>> byBudget = new TreeMap<>();
         for (int budget : BUDGETS) {
             Explainer explainer = new Explainer(model, base.withProbes(budget));

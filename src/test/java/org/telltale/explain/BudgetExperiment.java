@@ -40,8 +40,8 @@ public final class BudgetExperiment {
         }
         if (what.equals("all") || what.equals("bandwidth")) {
             for (double sigma : new double[] {0.1, 0.25, 0.5, 1.0}) {
-                ExplainSettings s = ExplainSettings.defaults().withBandwidth(sigma);
-                Explainer ref = new Explainer(model, s.withProbes(16000).withBootstrap(0));
+                ExplainSettings s = ExplainSettings.defaults().withBandwidth(sigma).withSplitHalf(true);
+                Explainer ref = new Explainer(model, s.withProbes(16000));
                 Explainer fixed = new Explainer(model, s);
                 double agree = 0;
                 double stab = 0;
@@ -57,10 +57,10 @@ public final class BudgetExperiment {
         }
         if (what.equals("all") || what.equals("budget")) {
             ExplainSettings s = ExplainSettings.defaults();
-            Explainer ref = new Explainer(model, s.withProbes(16000).withBootstrap(0));
-            for (String budget : new String[] {"250", "500", "1000", "2000", "auto:0.9", "auto:0.8", "auto:0.7"}) {
+            Explainer ref = new Explainer(model, s.withProbes(16000));
+            for (String budget : new String[] {"250", "500", "1000", "2000", "auto"}) {
                 ExplainSettings b = budget.startsWith("auto")
-                        ? s.withProbes(ExplainSettings.AUTO).withStabilityTarget(Double.parseDouble(budget.substring(5)))
+                        ? s.withProbes(ExplainSettings.AUTO)
                         : s.withProbes(Integer.parseInt(budget));
                 Explainer ex = new Explainer(model, b);
                 double agree = 0;

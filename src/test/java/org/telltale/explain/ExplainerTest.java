@@ -40,7 +40,7 @@ class ExplainerTest {
     void recoversTheWeightsOfAModelLinearInWordPresenceFromAllSubsets() {
         // Common practice: a least-squares fit whose model family contains the truth returns it.
         FunctionClassifier model = new FunctionClassifier(ExplainerTest::linear);
-        ExplainSettings settings = ExplainSettings.defaults().withSelect(Selection.NONE).withProbes(1 << 13);
+        ExplainSettings settings = ExplainSettings.defaults().withWords(ExplainSettings.ALL_UNITS).withProbes(1 << 13);
         Explanation e = new Explainer(model, settings).explain(Document.unlabelled("t1", TEXT), "yes");
         assertTrue(e.method().exact());
         assertEquals(13, e.method().units()); // "my" occurs twice: 14 tokens, 13 words
@@ -105,7 +105,7 @@ class ExplainerTest {
             }
         }
         ExplainSettings settings = ExplainSettings.defaults().withWeighting(Weighting.SHAPLEY)
-                .withSelect(Selection.NONE).withProbes(1 << d);
+                .withWords(ExplainSettings.ALL_UNITS).withProbes(1 << d);
         Explanation e = new Explainer(model, settings).explain(Document.unlabelled("s1", text), "yes");
         assertTrue(e.method().exact());
         Map<String, Double> got = new HashMap<>();
@@ -195,7 +195,7 @@ class ExplainerTest {
     }
 
     @org.junit.jupiter.params.ParameterizedTest
-    @org.junit.jupiter.params.provider.EnumSource(value = Selection.class, names = {"FORWARD", "LARS", "LARGEST"})
+    @org.junit.jupiter.params.provider.EnumSource(value = Selection.class, names = {"FORWARD", "LASSO"})
     void everySelectionFindsTheWordsALinearModelUses(Selection selection) {
         // Common practice: with the truth in the model family, each selection rule recovers its support.
         FunctionClassifier model = new FunctionClassifier(ExplainerTest::linear);

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.telltale.explain.Explanation;
+import org.telltale.report.EffectScale;
 
 /** Builds the {@link DocumentView} of an explanation: formats numbers, tints and marks. */
 final class DocumentViews {
@@ -14,8 +15,9 @@ final class DocumentViews {
 
     static DocumentView of(Explanation e, String anchor) {
         List<Explanation.TermWeight> terms = e.terms();
-        int[] levels = levels(terms);
-        double scale = intervalScale(terms);
+        EffectScale effect = EffectScale.of(e);
+        int[] levels = levels(terms, effect);
+        double scale = effect.full();
         List<DocumentView.LedgerRow> rows = new ArrayList<>(terms.size());
         int spanCount = 0;
         for (int i = 0; i < terms.size(); i++) {
@@ -56,10 +58,12 @@ final class DocumentViews {
         line.append("shapley".equals(m.weighting()) ? "Shapley kernel"
                 : "cosine kernel σ " + Numbers.plain(m.bandwidth(), 2));
         line.append(" · ").append(m.selection()).append(" selection");
+        line.append(" · explains the ").append(m.logOdds() ? "log-odds (from " + m.source() + ")" : "probability");
+        line.append(" · a full bar is ").append(EffectScale.of(m).fullText());
         line.append(" · ").append(m.exact() ? "exact enumeration" : m.calls() + " model calls");
         if (m.level() > 0 && m.level() < 1) {
             line.append(" · ").append(Numbers.plain(m.level() * 100, 0)).append("% intervals");
-            line.append(m.resamples() > 0 ? " (bootstrap, " + m.resamples() + " resamples)" : "");
+            line.append(" (").append(m.interval()).append(')');
         }
         if (Double.isFinite(m.stability())) {
             line.append(" · stability ").append(Numbers.plain(m.stability(), 2));
@@ -68,40 +72,29 @@ final class DocumentViews {
     }
 
     /**
-     * Tint level of each term: its absolute weight against the largest in the document, in
-     * {@link Palette#LEVELS} equal steps, so the strongest term of every document is deepest.
+     * Tint level of each term: its absolute weight as a share of a full bar of the score range
+     * ({@link EffectScale}), in {@link Palette#LEVELS} equal steps, so equal weights get equal tints
+     * in every document and a document of near-zero weights stays pale.
      */
-    static int[] levels(List<Explanation.TermWeight> terms) {
-        double max = 0;
-        for (Explanation.TermWeight t : terms) {
-            max = Math.max(max, Math.abs(t.weight()));
-        }
+    static int[] levels(List<Explanation.TermWeight> terms, EffectScale scale) {
         int[] levels = new int[terms.size()];
         for (int i = 0; i < levels.length; i++) {
-            double share = max == 0 ? 0 : Math.abs(terms.get(i).weight()) / max;
+            double share = scale.share(terms.get(i).weight());
             levels[i] = Math.max(1, Math.min(Palette.LEVELS, (int) Math.ceil(share * Palette.LEVELS)));
         }
         return levels;
-    }
-
-    private static double intervalScale(List<Explanation.TermWeight> terms) {
-        double max = 0;
-        for (Explanation.TermWeight t : terms) {
-            max = Math.max(max, Math.max(Math.abs(t.low()), Math.max(Math.abs(t.high()), Math.abs(t.weight()))));
-        }
-        return max == 0 || Double.isNaN(max) ? 1 : max;
     }
 
     private static DocumentView.LedgerRow row(int i, Explanation.TermWeight t, int level, double scale, String label) {
         boolean toward = t.weight() >= 0;
         int n = t.spans().size();
         String weight = Numbers.signed(t.weight());
-        String low = Numbers.signed(t.low());
-        String high = Numbers.signed(t.high());
+        String low = Numbers.signed(EffectScale.low(t));
+        String high = Numbers.signed(EffectScale.high(t));
         String description = "weight " + weight + ", interval " + low + " to " + high + ", "
                 + (toward ? "toward " : "away from ") + VisibleText.inline(label) + ", " + n + (n == 1 ? " occurrence" : " occurrences");
         return new DocumentView.LedgerRow(i, VisibleText.inline(t.term()), weight, low, high, n, toward, level,
-                x(0, scale), x(t.low(), scale), x(t.high(), scale), x(t.weight(), scale), description);
+                x(0, scale), x(EffectScale.low(t), scale), x(EffectScale.high(t), scale), x(t.weight(), scale), description);
     }
 
     private static String x(double v, double scale) {

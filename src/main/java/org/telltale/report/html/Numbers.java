@@ -12,7 +12,9 @@ final class Numbers {
         if (Double.isNaN(value)) {
             return "n/a";
         }
-        String s = String.format(Locale.ROOT, "%+.3f", value);
+        // Three decimals, or three significant digits when that would show a non-zero value as ±0.000.
+        String s = value != 0 && Math.abs(value) < 0.0005 ? String.format(Locale.ROOT, "%+.2e", value)
+                : String.format(Locale.ROOT, "%+.3f", value);
         return s.startsWith("-") ? "\u2212" + s.substring(1) : s;
     }
 

@@ -26,13 +26,16 @@ import org.telltale.explain.Explanation;
 import org.telltale.text.Span;
 
 /**
- * Writes and reads the {@code telltale.explanations} version 1 format:
+ * Writes the {@code telltale.explanations} version 2 format, and reads versions 1 and 2:
  * <pre>{"format":"telltale.explanations","version":1,"explanations":[{"id","label","score","probes",
  *   "fit":{"intercept","r2","prediction"},"terms":[{"term","weight","low","high","spans":[[s,e],…]}],
  *   "timing":{"model_ms","total_ms"}, …}]}</pre>
  * Each explanation also carries {@code predicted}, {@code scores}, {@code gold}, {@code text},
- * {@code units}, {@code calls}, {@code exact}, {@code stability}, {@code resamples}, {@code notes}
- * and {@code settings}, so that a report can be rendered from the file alone. Fields are always
+ * {@code units}, {@code calls}, {@code exact}, {@code stability}, {@code interval}, {@code target}
+ * ({@code kind}, {@code source}, {@code value}, {@code saturated}), {@code probes_to_go}, {@code notes}
+ * and {@code settings}, so that a report can be rendered from the file alone. Version 2 added
+ * {@code interval}, {@code target}, {@code probes_to_go} and {@code settings.sampling}, and dropped
+ * {@code resamples}; a version 1 file reads as a probability explanation with bootstrap intervals. Fields are always
  * written in the same order and numbers in Java's shortest round-trip form, so equal explanations
  * give byte-identical files; a number that is not finite is written as {@code null}.
  *
@@ -40,7 +43,9 @@ import org.telltale.text.Span;
  */
 public final class ExplanationsJson {
     public static final String FORMAT = "telltale.explanations";
-    public static final int VERSION = 1;
+    public static final int VERSION = 2;
+    /** The oldest version this reader still accepts (version 1: probability only, bootstrap intervals). */
+    public static final int OLDEST = 1;
 
     private static final JsonFactory FACTORY = new JsonFactory();
     private static final ObjectMapper MAPPER = new ObjectMapper();
@@ -146,7 +151,14 @@ public final class ExplanationsJson {
             g.writeNumberField("calls", m.calls());
             g.writeBooleanField("exact", m.exact());
             number(g, "stability", m.stability());
-            g.writeNumberField("resamples", m.resamples());
+            g.writeStringField("interval", m.interval());
+            g.writeObjectFieldStart("target");
+            g.writeStringField("kind", m.target());
+            g.writeStringField("source", m.source());
+            number(g, "value", m.targetValue());
+            number(g, "saturated", m.saturated());
+            g.writeEndObject();
+            g.writeNumberField("probes_to_go", m.probesToGo());
             g.writeArrayFieldStart("notes");
             for (String note : m.notes()) {
                 g.writeString(note);
@@ -156,6 +168,7 @@ public final class ExplanationsJson {
             g.writeStringField("unit", m.unit());
             g.writeStringField("weighting", m.weighting());
             g.writeStringField("select", m.selection());
+            g.writeStringField("sampling", m.sampling());
             g.writeNumberField("words", m.words());
             number(g, "bandwidth", m.bandwidth());
             number(g, "ridge", m.ridge());
@@ -208,9 +221,9 @@ public final class ExplanationsJson {
                 throw new TelltaleException(source + ": format is '" + format + "', expected '" + FORMAT + "'");
             }
             int version = whole.path("version").asInt(-1);
-            if (version != VERSION) {
+            if (version < OLDEST || version > VERSION) {
                 throw new TelltaleException(source + ": version " + whole.path("version") + " of " + FORMAT
-                        + " is not supported (this Telltale reads version " + VERSION + ")");
+                        + " is not supported (this Telltale reads versions " + OLDEST + " to " + VERSION + ")");
             }
             JsonNode list = whole.path("explanations");
             if (!list.isArray()) {
@@ -285,12 +298,19 @@ public final class ExplanationsJson {
         if (settings != null && settings.isObject()) {
             List<String> notes = new ArrayList<>();
             n.path("notes").forEach(x -> notes.add(x.asText()));
+            JsonNode target = n.path("target");
+            // Version 1 files have no target (they explained the probability) and bootstrap resamples.
+            String interval = n.has("interval") ? n.path("interval").asText()
+                    : n.path("exact").asBoolean() ? "exact" : "bootstrap";
             method = new Explanation.Method(settings.path("unit").asText(), settings.path("weighting").asText(),
                     settings.path("select").asText(), optNum(settings, "bandwidth"), optNum(settings, "ridge"),
                     settings.path("words").asInt(), settings.path("seed").asLong(), settings.path("analyzer").asText(),
                     settings.path("filler").asText(""), optNum(settings, "level"), n.path("units").asInt(),
-                    n.path("calls").asInt(), n.path("exact").asBoolean(), optNum(n, "stability"),
-                    n.path("resamples").asInt(), notes);
+                    n.path("calls").asInt(), n.path("exact").asBoolean(), optNum(n, "stability"), interval,
+                    target.path("kind").asText("probability"), target.path("source").asText("probabilities"),
+                    target.has("value") ? optNum(target, "value") : num(n, "score", at),
+                    target.has("saturated") ? optNum(target, "saturated") : Double.NaN,
+                    n.path("probes_to_go").asInt(-1), settings.path("sampling").asText("uniform"), notes);
         }
         return new Explanation(id, text(n, "label", at, true), num(n, "score", at), text(n, "predicted", at, false),
                 scores, required(n, "probes", at).asInt(),

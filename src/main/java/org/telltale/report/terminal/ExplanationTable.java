@@ -3,11 +3,13 @@ package org.telltale.report.terminal;
 import java.util.List;
 import java.util.Locale;
 import org.telltale.explain.Explanation;
+import org.telltale.report.EffectScale;
 
 /**
  * The readable terminal view of one explanation: a heading with the prediction, the explained
  * label, fit quality and probes; a table of the selected units (weight, interval, occurrences,
- * and a bar whose length is the weight's share of the largest); the notes; and a caution.
+ * and a bar whose length is a fixed share of the score range, see {@link EffectScale}); the notes;
+ * and a caution.
  */
 public final class ExplanationTable {
     private static final int BAR = 12;
@@ -30,22 +32,35 @@ public final class ExplanationTable {
             out.append("   gold ").append(SafeText.line(e.gold()));
         }
         out.append('\n');
-        out.append(String.format(Locale.ROOT, "  explained %s, score %.3f; surrogate predicts %.3f, fit quality (weighted R2) %.3f%n",
-                SafeText.line(e.label()), e.score(), e.fit().prediction(), e.fit().r2()));
+        Explanation.Method method = e.method();
+        if (method != null && method.logOdds()) {
+            out.append(String.format(Locale.ROOT, "  explained the log-odds of %s (from %s): %+.3f at score %.3f;"
+                    + " surrogate predicts %+.3f, fit quality (weighted R2) %.3f%n", SafeText.line(e.label()),
+                    method.source(), method.targetValue(), e.score(), e.fit().prediction(), e.fit().r2()));
+        } else {
+            out.append(String.format(Locale.ROOT, "  explained %s, score %.3f; surrogate predicts %.3f, fit quality (weighted R2) %.3f%n",
+                    SafeText.line(e.label()), e.score(), e.fit().prediction(), e.fit().r2()));
+        }
         out.append("  ").append(probeLine(e)).append('\n');
         out.append('\n');
         if (e.terms().isEmpty()) {
             out.append("  (no terms)\n");
         } else {
+            EffectScale scale = EffectScale.of(e);
+            boolean nothing = scale.nothingMeasurable(e);
             out.append(header(e, ansi));
-            double largest = 0;
-            for (Explanation.TermWeight t : e.terms()) {
-                largest = Math.max(largest, Math.abs(t.weight()));
-            }
             int rank = 0;
             for (Explanation.TermWeight t : e.terms()) {
                 rank++;
-                out.append(row(rank, t, largest, ansi)).append('\n');
+                out.append(row(rank, t, scale, nothing, ansi)).append('\n');
+            }
+            if (nothing) {
+                out.append(String.format(Locale.ROOT, "  no measurable effect: no weight reaches %s in %s; the model's score"
+                        + " hardly moved when units were removed%n", EffectScale.signed(EffectScale.NEGLIGIBLE * scale.full())
+                        .substring(1), scale.unit()));
+            } else {
+                out.append(ansi.dim(String.format(Locale.ROOT, "  a full bar is a weight of %s in %s%n",
+                        scale.fullText(), scale.unit())));
             }
         }
         Explanation.Method m = e.method();
@@ -68,7 +83,14 @@ public final class ExplanationTable {
                 m.units(), m.unit(), m.weighting()));
         if (m.exact()) {
             s.append(", exact");
-        } else if (Double.isFinite(m.stability())) {
+        } else if (m.probesToGo() == 0) {
+            s.append(", reported units separated from the next");
+        } else if (m.probesToGo() > 0) {
+            s.append(String.format(Locale.ROOT, ", about %d more probes to separate the reported units", m.probesToGo()));
+        } else if ("sandwich".equals(m.interval())) {
+            s.append(", the last reported units are not separated from the next");
+        }
+        if (Double.isFinite(m.stability())) {
             s.append(String.format(Locale.ROOT, ", split-half agreement %.2f", m.stability()));
         }
         return s.toString();
@@ -77,22 +99,25 @@ public final class ExplanationTable {
     private static String header(Explanation e, Ansi ansi) {
         String level = e.method() == null || e.method().exact() ? "interval"
                 : String.format(Locale.ROOT, "%d%% interval", Math.round(100 * e.method().level()));
-        return ansi.dim(String.format(Locale.ROOT, "  %3s  %-" + TERM_WIDTH + "s %9s  %-21s %5s  %s%n", "#", "term",
+        return ansi.dim(String.format(Locale.ROOT, "  %3s  %-" + TERM_WIDTH + "s %10s  %-23s %5s  %s%n", "#", "term",
                 "weight", level, "occ.", "effect"));
     }
 
-    private static String row(int rank, Explanation.TermWeight t, double largest, Ansi ansi) {
+    private static String row(int rank, Explanation.TermWeight t, EffectScale scale, boolean nothing, Ansi ansi) {
         String term = SafeText.line(t.term());
         if (term.length() > TERM_WIDTH) {
             term = term.substring(0, TERM_WIDTH - 1) + "~";
         }
-        int length = largest == 0 ? 0 : (int) Math.round(BAR * Math.abs(t.weight()) / largest);
-        boolean up = t.weight() >= 0;
-        String bar = (up ? "+" : "-").repeat(Math.max(length, t.weight() == 0 ? 0 : 1));
-        String coloured = up ? ansi.raises(bar, false) : ansi.lowers(bar, false);
-        String interval = String.format(Locale.ROOT, "[%+.4f, %+.4f]", t.low(), t.high());
-        return String.format(Locale.ROOT, "  %3d  %-" + TERM_WIDTH + "s %+9.4f  %-21s %5d  %s", rank, term, t.weight(),
-                interval, t.spans().size(), coloured);
+        String coloured = "";
+        if (!nothing) {
+            int length = (int) Math.round(BAR * scale.share(t.weight()));
+            boolean up = t.weight() >= 0;
+            String bar = length == 0 ? "." : (up ? "+" : "-").repeat(length) + (scale.beyond(t.weight()) ? ">" : "");
+            coloured = up ? ansi.raises(bar, false) : ansi.lowers(bar, false);
+        }
+        String interval = "[" + EffectScale.signed(EffectScale.low(t)) + ", " + EffectScale.signed(EffectScale.high(t)) + "]";
+        return String.format(Locale.ROOT, "  %3d  %-" + TERM_WIDTH + "s %10s  %-23s %5d  %s", rank, term,
+                EffectScale.signed(t.weight()), interval, t.spans().size(), coloured).stripTrailing();
     }
 
     /** Several explanations, separated by a blank line. */

@@ -1,6 +1,7 @@
 package org.telltale.report.json;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -27,16 +28,16 @@ class ExplanationsJsonTest {
                         new Explanation.TermWeight("invoice", 0.21, 0.18, 0.24, List.of(new Span(4, 11), new Span(30, 37))),
                         new Explanation.TermWeight("parcel", -0.05, -0.07, -0.03, List.of(new Span(12, 18)))),
                 new Explanation.Timing(120, 180), "Our invoice parcel \"late\" é… invoice", "billing",
-                new Explanation.Method("word", "cosine", "auto", 0.25, 1.0, 10, 1L, "standard", "", 0.95, 5, 1480,
-                        false, Double.NaN, 200, List.of("a note")));
+                new Explanation.Method("word", "cosine", "forward", 0.25, 1.0, 10, 1L, "standard", "", 0.95, 5, 1480,
+                        false, Double.NaN, "sandwich", "log-odds", "logits", 1.45, 0.25, 0, "uniform", List.of("a note")));
     }
 
     @Test
     void writesTheContractFieldNames() throws IOException {
-        // The telltale.explanations v1 contract (issue text): these names must not change.
+        // The telltale.explanations contract (v1 names kept; v2 adds interval, target, probes_to_go).
         JsonNode root = new ObjectMapper().readTree(ExplanationsJson.toJson(List.of(sample())));
         assertEquals("telltale.explanations", root.get("format").asText());
-        assertEquals(1, root.get("version").asInt());
+        assertEquals(2, root.get("version").asInt());
         JsonNode e = root.get("explanations").get(0);
         for (String f : List.of("id", "label", "score", "probes", "fit", "terms", "timing")) {
             assertTrue(e.has(f), f);
@@ -48,6 +49,27 @@ class ExplanationsJsonTest {
         assertEquals(30, t.get("spans").get(1).get(0).asInt());
         assertEquals(120, e.get("timing").get("model_ms").asInt());
         assertTrue(e.get("stability").isNull(), "NaN must be written as null");
+        assertEquals("sandwich", e.get("interval").asText());
+        assertEquals("log-odds", e.get("target").get("kind").asText());
+        assertEquals("logits", e.get("target").get("source").asText());
+        assertEquals(1.45, e.get("target").get("value").asDouble());
+        assertEquals(0.25, e.get("target").get("saturated").asDouble());
+        assertEquals(0, e.get("probes_to_go").asInt());
+        assertFalse(e.has("resamples"), "bootstrap resamples are gone in version 2");
+    }
+
+    @Test
+    void readsAVersionOneFileAsAProbabilityExplanationWithBootstrapIntervals() throws IOException {
+        String v1 = ExplanationsJson.toJson(List.of(sample())).replace("\"version\" : 2", "\"version\" : 1")
+                .replaceAll("\"interval\" : \"sandwich\",", "\"resamples\" : 200,")
+                .replaceAll("(?s)\"target\" : \\{[^}]*\\},", "").replaceAll("\"probes_to_go\" : 0,", "");
+        assertTrue(v1.contains("\"version\" : 1") && !v1.contains("target"), v1);
+        Explanation.Method m = ExplanationsJson.read(new ByteArrayInputStream(v1.getBytes(StandardCharsets.UTF_8)), "v1.json")
+                .get(0).method();
+        assertEquals("probability", m.target());
+        assertEquals("bootstrap", m.interval());
+        assertEquals(0.81, m.targetValue());
+        assertEquals(-1, m.probesToGo());
     }
 
     @Test

@@ -54,4 +54,34 @@ class TerminalViewsTest {
         assertTrue(marked.contains("more characters not shown"));
         assertTrue(marked.length() < MarkedLine.MAX_CHARS + 100);
     }
+
+    private static Explanation withWeights(double... weights) {
+        List<Explanation.TermWeight> terms = new java.util.ArrayList<>();
+        for (int i = 0; i < weights.length; i++) {
+            // A bootstrap interval from an older file may exclude its estimate: [w + 1e-5, w + 2e-5].
+            terms.add(new Explanation.TermWeight("t" + i, weights[i], weights[i] + 1e-5, weights[i] + 2e-5,
+                    List.of(new Span(0, 1))));
+        }
+        return new Explanation("x", "spam", 1.0, "spam", Map.of("spam", 1.0), 2000, new Explanation.Fit(1, 0, 1), terms,
+                new Explanation.Timing(0, 0), "x", null);
+    }
+
+    @Test
+    void weightsThatAreAllNearZeroShowNoMeasurableEffectInsteadOfFullBars() {
+        // Common practice for charts: bars on a fixed scale, so nothing is drawn for nothing.
+        String table = ExplanationTable.render(withWeights(0.0, 3e-9, -1e-9), false);
+        assertTrue(table.contains("no measurable effect"), table);
+        assertFalse(table.contains("++") || table.contains("--"), table);
+        assertTrue(table.contains("+3.00e-09"), "enough digits to tell a weight from zero: " + table);
+        assertFalse(table.contains("-0.0000"), table);
+    }
+
+    @Test
+    void barsAreAFixedShareOfTheScoreRangeAndIntervalsHoldTheirEstimate() {
+        String table = ExplanationTable.render(withWeights(0.25, 0.02), false);
+        // A full bar of 12 is 0.5 in probability: 0.25 gets 6, 0.02 rounds to none and shows a dot.
+        assertTrue(table.lines().anyMatch(l -> l.contains(" t0 ") && l.endsWith(" ++++++")), table);
+        assertTrue(table.lines().anyMatch(l -> l.contains(" t1 ") && l.endsWith(" .")), table);
+        assertTrue(table.contains("[+0.2500, +0.2500]"), "the interval is widened to hold its estimate: " + table);
+    }
 }
