@@ -1,7 +1,5 @@
 package org.telltale.audit;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -13,11 +11,11 @@ import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.telltale.TelltaleException;
+import org.telltale.json.JsonValue;
 
 /**
  * The append-only record of an audit's finished work, one JSON object per line, each line forced
@@ -120,12 +118,12 @@ public final class Journal implements AutoCloseable {
                 if (lines[i].isEmpty()) {
                     continue;
                 }
-                JsonNode node = parse(lines[i], file, i + 1);
-                String type = node.path("type").asText();
+                JsonValue node = JsonValue.parse(lines[i], file + ":" + (i + 1));
+                String type = node.requireObject().string("type");
                 switch (type) {
                     case "start" -> {
                         checkFormat(node, file);
-                        RunFingerprint was = fingerprintOf(node.get("fingerprint"), file);
+                        RunFingerprint was = fingerprintOf(node.object("fingerprint"));
                         var difference = was.difference(fingerprint);
                         if (difference.isPresent()) {
                             throw new TelltaleException(file + ": cannot resume an audit whose " + difference.get()
@@ -134,22 +132,17 @@ public final class Journal implements AutoCloseable {
                         started = true;
                     }
                     case "scored" -> {
-                        ScoredBatch batch = new ScoredBatch(node.path("start").asLong(),
-                                Long.parseUnsignedLong(node.path("ids_hash").asText("0"), 16),
-                                interned(strings(node.path("labels"))), interned(strings(node.path("predicted"))),
-                                node.path("retries").asLong());
+                        ScoredBatch batch = new ScoredBatch(node.integer("start"), hash(node),
+                                interned(node.strings("labels")), interned(node.strings("predicted")),
+                                node.integer("retries"));
                         scored.put(batch.start(), batch);
                         retries += batch.retries();
                     }
                     case "explained" -> {
-                        JsonNode explanation = node.get("explanation");
-                        if (explanation == null || !explanation.isObject()) {
-                            throw new TelltaleException(file + ":" + (i + 1) + ": explained line without an explanation");
-                        }
-                        explained.put(node.path("id").asText(), explanation.toString());
-                        retries += node.path("retries").asLong();
+                        explained.put(node.string("id"), node.object("explanation").node().toString());
+                        retries += node.integer("retries");
                     }
-                    default -> throw new TelltaleException(file + ":" + (i + 1) + ": unknown journal line type '" + type + "'");
+                    default -> throw node.at("type", "unknown journal line type '" + type + "'");
                 }
                 if (!started) {
                     throw new TelltaleException(file + ":" + (i + 1) + ": the journal does not begin with its start line");
@@ -247,42 +240,28 @@ public final class Journal implements AutoCloseable {
         }
     }
 
-    private static JsonNode parse(String line, Path file, int number) {
-        try {
-            JsonNode node = MAPPER.readTree(line);
-            if (node == null || !node.isObject()) {
-                throw new TelltaleException(file + ":" + number + ": a journal line must be a JSON object");
-            }
-            return node;
-        } catch (JsonProcessingException e) {
-            throw new TelltaleException(file + ":" + number + ": damaged journal line (" + e.getOriginalMessage()
-                    + "); rerun with --force to start over");
+    /** One format and version check (JsonValue.version); a journal from before version 2 has no format at all. */
+    private static void checkFormat(JsonValue start, Path file) {
+        if (!start.has("format")) {
+            throw new TelltaleException(file + ": not a " + FORMAT + " version " + VERSION + " journal (found an older "
+                    + "journal without a format); rerun without --resume and with --force to start over");
         }
+        start.version(FORMAT, VERSION);
     }
 
-    private static void checkFormat(JsonNode start, Path file) {
-        String format = start.path("format").asText("");
-        int version = start.path("version").asInt(1);
-        if (!format.equals(FORMAT) || version != VERSION) {
-            throw new TelltaleException(file + ": not a " + FORMAT + " version " + VERSION + " journal (found "
-                    + (format.isEmpty() ? "an older journal without a format" : format + " version " + version)
-                    + "); rerun without --resume and with --force to start over");
-        }
-    }
-
-    private static RunFingerprint fingerprintOf(JsonNode fields, Path file) {
-        if (fields == null || !fields.isObject()) {
-            throw new TelltaleException(file + ":1: the start line has no fingerprint object");
-        }
+    private static RunFingerprint fingerprintOf(JsonValue fields) {
         Map<String, String> out = new LinkedHashMap<>();
-        fields.fields().forEachRemaining(e -> out.put(e.getKey(), e.getValue().asText()));
+        fields.fields().forEach((name, value) -> out.put(name, value.asString()));
         return new RunFingerprint(out);
     }
 
-    private static List<String> strings(JsonNode array) {
-        List<String> out = new ArrayList<>();
-        array.forEach(v -> out.add(v.asText()));
-        return out;
+    private static long hash(JsonValue scored) {
+        String hex = scored.string("ids_hash");
+        try {
+            return Long.parseUnsignedLong(hex, 16);
+        } catch (NumberFormatException e) {
+            throw scored.get("ids_hash").here("expected up to 16 hexadecimal digits");
+        }
     }
 
     /** The same few label strings over and over: share one instance of each. */

@@ -2,14 +2,14 @@ package org.telltale.serve;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
+import org.telltale.json.ContractException;
+import org.telltale.json.JsonValue;
 import org.telltale.model.ScoreMatrix;
 
 /**
@@ -23,31 +23,23 @@ final class ScoreRequests {
     private ScoreRequests() {
     }
 
-    static JsonNode parse(byte[] body) {
+    /** What a client sent, read by the strict reader; a broken contract is a 400 naming the path and what was found. */
+    static JsonValue parse(byte[] body) {
         try {
-            JsonNode n = MAPPER.readTree(body);
-            if (n == null || n.isMissingNode()) {
-                throw new HttpError(400, "the request body is empty");
-            }
-            return n;
-        } catch (JsonProcessingException e) {
-            throw new HttpError(400, "the request body is not valid JSON: " + e.getOriginalMessage());
-        } catch (IOException e) {
-            throw new HttpError(400, "the request body cannot be read");
+            return JsonValue.parse(body, "the request body");
+        } catch (ContractException e) {
+            throw new HttpError(400, e.getMessage());
         }
     }
 
     /** {@code {"texts": ["…", …]}} → the texts. */
     static List<String> nativeTexts(byte[] body, int maxBatch) {
-        JsonNode root = parse(body);
-        if (!root.isObject()) {
-            throw new HttpError(400, "expected a JSON object {\"texts\": [...]}");
+        JsonValue root = parse(body);
+        try {
+            return strings(root.requireObject().array("texts"), maxBatch);
+        } catch (ContractException e) {
+            throw new HttpError(400, e.getMessage() + " (expected {\"texts\": [\"…\", …]})");
         }
-        JsonNode texts = root.get("texts");
-        if (texts == null || !texts.isArray()) {
-            throw new HttpError(400, "expected a field \"texts\" holding an array of strings");
-        }
-        return strings(texts, "texts", maxBatch);
     }
 
     /** The texts of an OIP v2 inference request, and its "id" (null when absent). */
@@ -56,52 +48,48 @@ final class ScoreRequests {
 
     /** An OIP v2 inference request → the texts of its one input, a BYTES tensor of shape [n] or [n, 1]. */
     static InferRequest inferTexts(byte[] body, int maxBatch) {
-        JsonNode root = parse(body);
-        if (!root.isObject()) {
-            throw new HttpError(400, "expected an inference request object with \"inputs\"");
-        }
-        JsonNode inputs = root.get("inputs");
-        if (inputs == null || !inputs.isArray() || inputs.size() != 1) {
-            throw new HttpError(400, "expected \"inputs\" holding exactly one tensor (the texts)");
-        }
-        JsonNode input = inputs.get(0);
-        if (!"BYTES".equals(input.path("datatype").asText())) {
-            throw new HttpError(400, "the input tensor must have datatype BYTES");
-        }
-        JsonNode shape = input.get("shape");
-        JsonNode data = input.get("data");
-        if (data == null || !data.isArray()) {
-            throw new HttpError(400, "the input tensor has no \"data\" array");
-        }
-        ArrayNode flat = MAPPER.createArrayNode();
-        for (JsonNode d : data) {
-            if (d.isArray()) {
-                d.forEach(flat::add);
-            } else {
-                flat.add(d);
+        JsonValue root = parse(body);
+        try {
+            List<JsonValue> inputs = root.requireObject().array("inputs");
+            if (inputs.size() != 1) {
+                throw new HttpError(400, "expected \"inputs\" holding exactly one tensor (the texts), found " + inputs.size());
             }
+            JsonValue input = inputs.get(0).requireObject();
+            if (!"BYTES".equals(input.string("datatype"))) {
+                throw new HttpError(400, "the input tensor must have datatype BYTES");
+            }
+            List<JsonValue> flat = new ArrayList<>();
+            for (JsonValue d : input.array("data")) {
+                if (d.node().isArray()) {
+                    flat.addAll(d.elements());
+                } else {
+                    flat.add(d);
+                }
+            }
+            List<String> texts = strings(flat, maxBatch);
+            List<JsonValue> shape = input.array("shape");
+            if (shape.isEmpty() || shape.size() > 2 || !isInteger(shape.get(0), texts.size())
+                    || (shape.size() == 2 && !isInteger(shape.get(1), 1))) {
+                throw new HttpError(400, "the input tensor's shape must be [" + texts.size() + "] for " + texts.size() + " texts");
+            }
+            return new InferRequest(texts, root.find("id").filter(id -> id.node().isTextual()).map(JsonValue::asString).orElse(null));
+        } catch (ContractException e) {
+            throw new HttpError(400, e.getMessage());
         }
-        List<String> texts = strings(flat, "data", maxBatch);
-        if (shape == null || !shape.isArray() || shape.isEmpty() || shape.size() > 2
-                || shape.get(0).asLong(-1) != texts.size() || (shape.size() == 2 && shape.get(1).asLong(-1) != 1)) {
-            throw new HttpError(400, "the input tensor's shape must be [" + texts.size() + "] for " + texts.size() + " texts");
-        }
-        JsonNode id = root.get("id");
-        return new InferRequest(texts, id != null && id.isTextual() ? id.textValue() : null);
     }
 
-    private static List<String> strings(JsonNode array, String field, int maxBatch) {
+    private static boolean isInteger(JsonValue v, long expected) {
+        return v.node().isIntegralNumber() && v.node().asLong() == expected;
+    }
+
+    private static List<String> strings(List<JsonValue> array, int maxBatch) {
         if (array.size() > maxBatch) {
             throw new HttpError(400, "the request holds " + array.size() + " texts; this server takes at most " + maxBatch
                     + " per request");
         }
         List<String> out = new ArrayList<>(array.size());
-        for (int i = 0; i < array.size(); i++) {
-            JsonNode t = array.get(i);
-            if (!t.isTextual()) {
-                throw new HttpError(400, "\"" + field + "\"[" + i + "] is not a string");
-            }
-            out.add(t.textValue());
+        for (JsonValue t : array) {
+            out.add(t.asString());
         }
         return out;
     }

@@ -78,4 +78,32 @@ class JournalTest {
         assertEquals(file + ": not a telltale.journal version 2 journal (found an older journal without a format); "
                 + "rerun without --resume and with --force to start over", e.getMessage());
     }
+
+    private static String resumeError(Path dir, String... lines) throws Exception {
+        Path file = dir.resolve("journal.jsonl");
+        Journal.create(file, RUN_A).close();
+        String header = Files.readAllLines(file, StandardCharsets.UTF_8).get(0);
+        Files.writeString(file, String.join("\n", lines).replace("HEADER", header) + "\n", StandardCharsets.UTF_8);
+        return assertThrows(TelltaleException.class, () -> Journal.resume(file, RUN_A)).getMessage();
+    }
+
+    @Test
+    void aScoredLineWithoutItsPredictionsIsNamed(@TempDir Path dir) throws Exception {
+        assertEquals(dir.resolve("journal.jsonl") + ":2: predicted: missing", resumeError(dir, "HEADER",
+                "{\"type\":\"scored\",\"start\":0,\"ids_hash\":\"1f\",\"labels\":[\"a\"],\"retries\":0}"));
+    }
+
+    @Test
+    void aMistypedStartIsNamedWithWhatWasFound(@TempDir Path dir) throws Exception {
+        assertEquals(dir.resolve("journal.jsonl") + ":2: start: expected an integer, found the string \"0\"", resumeError(dir,
+                "HEADER", "{\"type\":\"scored\",\"start\":\"0\",\"ids_hash\":\"1f\",\"labels\":[\"a\"],"
+                        + "\"predicted\":[\"a\"],\"retries\":0}"));
+    }
+
+    @Test
+    void aJournalOfAnotherVersionIsRefusedByTheVersionCheck(@TempDir Path dir) throws Exception {
+        assertEquals(dir.resolve("journal.jsonl") + ":1: version: telltale.journal version 3 is not supported (this "
+                + "Telltale reads version 2)", resumeError(dir, "{\"type\":\"start\",\"format\":\"telltale.journal\","
+                        + "\"version\":3,\"fingerprint\":{}}"));
+    }
 }

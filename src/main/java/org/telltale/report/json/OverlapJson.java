@@ -22,6 +22,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import org.telltale.TelltaleException;
+import org.telltale.json.JsonValue;
 import org.telltale.overlap.Banding;
 import org.telltale.overlap.Inflation;
 import org.telltale.overlap.OverlapPair;
@@ -185,141 +186,58 @@ public final class OverlapJson {
         }
     }
 
-    /** Reads the overlap result in {@code file}; errors name the file. */
+    /** Reads the overlap result in {@code file}; errors name the file and the path inside it. */
     public static OverlapResult read(Path file) throws IOException {
-        try {
-            return fromJson(Files.readString(file, StandardCharsets.UTF_8));
-        } catch (TelltaleException e) {
-            throw new TelltaleException(file + ": " + e.getMessage(), e);
-        }
+        return fromJson(JsonValue.read(file));
     }
 
     /** Parses the JSON text of an overlap result. */
     public static OverlapResult fromJson(String json) {
-        JsonNode root;
-        try {
-            root = MAPPER.readTree(json);
-        } catch (JsonProcessingException e) {
-            throw new TelltaleException("not valid JSON: " + e.getOriginalMessage()
-                    + " at line " + e.getLocation().getLineNr() + ", column " + e.getLocation().getColumnNr());
-        }
-        if (root == null || !root.isObject()) {
-            throw new TelltaleException("an overlap result must be a JSON object");
-        }
-        String format = text(root, "format", "");
-        if (!FORMAT.equals(format)) {
-            throw new TelltaleException("format is '" + format + "', expected '" + FORMAT + "'");
-        }
-        int version = (int) integer(root, "version", "");
-        if (version != VERSION) {
-            throw new TelltaleException("version " + version + " of " + FORMAT + " is not supported (expected " + VERSION + ")");
-        }
-        JsonNode s = object(root, "settings", "");
-        OverlapSettings settings = new OverlapSettings(real(s, "threshold", "settings"), (int) integer(s, "shingle", "settings"),
-                (int) integer(s, "signature", "settings"),
-                new Banding((int) integer(s, "rows", "settings"), (int) integer(s, "bands", "settings")),
-                integer(s, "seed", "settings"), 1, root.has("documents"));
-        JsonNode m = object(root, "summary", "");
-        OverlapSummary summary = new OverlapSummary(integer(m, "train_documents", "summary"),
-                integer(m, "test_documents", "summary"), integer(m, "train_empty", "summary"),
-                integer(m, "test_empty", "summary"), integer(m, "train_test_pairs", "summary"),
-                integer(m, "exact_train_test_pairs", "summary"), integer(m, "within_train_pairs", "summary"),
-                integer(m, "within_test_pairs", "summary"), integer(m, "test_seen", "summary"),
-                integer(m, "test_seen_exact", "summary"), integer(m, "test_seen_conflicting", "summary"),
-                integer(m, "train_seen", "summary"), integer(m, "candidates", "summary"));
+        return fromJson(JsonValue.parse(json, "overlap result"));
+    }
+
+    private static OverlapResult fromJson(JsonValue root) {
+        root.version(FORMAT, VERSION);
+        JsonValue s = root.object("settings");
+        OverlapSettings settings = new OverlapSettings(s.number("threshold"), s.int32("shingle"), s.int32("signature"),
+                new Banding(s.int32("rows"), s.int32("bands")), s.integer("seed"), 1, root.has("documents"));
+        JsonValue m = root.object("summary");
+        OverlapSummary summary = new OverlapSummary(m.integer("train_documents"), m.integer("test_documents"),
+                m.integer("train_empty"), m.integer("test_empty"), m.integer("train_test_pairs"),
+                m.integer("exact_train_test_pairs"), m.integer("within_train_pairs"), m.integer("within_test_pairs"),
+                m.integer("test_seen"), m.integer("test_seen_exact"), m.integer("test_seen_conflicting"),
+                m.integer("train_seen"), m.integer("candidates"));
         List<OverlapPair> pairs = new ArrayList<>();
         readPairs(root, "pairs", PairKind.TRAIN_TEST, "train", "test", pairs);
         readPairs(root, "within_train", PairKind.WITHIN_TRAIN, "first", "second", pairs);
         readPairs(root, "within_test", PairKind.WITHIN_TEST, "first", "second", pairs);
         Inflation inflation = null;
-        if (root.hasNonNull("accuracy")) {
-            JsonNode a = object(root, "accuracy", "");
-            inflation = new Inflation(text(a, "model", "accuracy"), integer(a, "labelled", "accuracy"),
-                    integer(a, "correct", "accuracy"), integer(a, "labelled_unseen", "accuracy"),
-                    integer(a, "correct_unseen", "accuracy"));
+        if (root.has("accuracy")) {
+            JsonValue a = root.object("accuracy");
+            inflation = new Inflation(a.string("model"), a.integer("labelled"), a.integer("correct"),
+                    a.integer("labelled_unseen"), a.integer("correct_unseen"));
         }
         Map<String, String> trainTexts = new LinkedHashMap<>();
         Map<String, String> testTexts = new LinkedHashMap<>();
-        if (root.hasNonNull("documents")) {
-            JsonNode d = object(root, "documents", "");
+        if (root.has("documents")) {
+            JsonValue d = root.object("documents");
             readTexts(d, "train", trainTexts);
             readTexts(d, "test", testTexts);
         }
-        return new OverlapResult(text(root, "train", ""), text(root, "test", ""), settings, pairs, summary,
+        return new OverlapResult(root.string("train"), root.string("test"), settings, pairs, summary,
                 trainTexts, testTexts, inflation);
     }
 
-    private static void readPairs(JsonNode root, String field, PairKind kind, String first, String second,
+    private static void readPairs(JsonValue root, String field, PairKind kind, String first, String second,
                                   List<OverlapPair> out) {
-        JsonNode array = root.get(field);
-        if (array == null || !array.isArray()) {
-            throw new TelltaleException("missing array '" + field + "'");
-        }
-        for (int i = 0; i < array.size(); i++) {
-            JsonNode p = array.get(i);
-            String where = field + "[" + i + "]";
-            out.add(new OverlapPair(kind, text(p, first, where), text(p, second, where), real(p, "similarity", where),
-                    bool(p, "exact", where), optionalText(p, first + "_label"), optionalText(p, second + "_label")));
+        for (JsonValue p : root.array(field)) {
+            out.add(new OverlapPair(kind, p.string(first), p.string(second), p.number("similarity"), p.bool("exact"),
+                    p.optionalString(first + "_label"), p.optionalString(second + "_label")));
         }
     }
 
-    private static void readTexts(JsonNode documents, String field, Map<String, String> out) {
-        JsonNode node = documents.get(field);
-        if (node == null) {
-            return;
-        }
-        for (Iterator<Map.Entry<String, JsonNode>> it = node.fields(); it.hasNext(); ) {
-            Map.Entry<String, JsonNode> e = it.next();
-            out.put(e.getKey(), e.getValue().asText());
-        }
-    }
-
-    private static JsonNode object(JsonNode node, String field, String where) {
-        JsonNode value = node.get(field);
-        if (value == null || !value.isObject()) {
-            throw missing(field, where, "an object");
-        }
-        return value;
-    }
-
-    private static String text(JsonNode node, String field, String where) {
-        JsonNode value = node.get(field);
-        if (value == null || !value.isTextual()) {
-            throw missing(field, where, "a string");
-        }
-        return value.asText();
-    }
-
-    private static String optionalText(JsonNode node, String field) {
-        JsonNode value = node.get(field);
-        return value == null || value.isNull() ? null : value.asText();
-    }
-
-    private static long integer(JsonNode node, String field, String where) {
-        JsonNode value = node.get(field);
-        if (value == null || !value.canConvertToLong() || !value.isIntegralNumber()) {
-            throw missing(field, where, "an integer");
-        }
-        return value.asLong();
-    }
-
-    private static double real(JsonNode node, String field, String where) {
-        JsonNode value = node.get(field);
-        if (value == null || !value.isNumber()) {
-            throw missing(field, where, "a number");
-        }
-        return value.asDouble();
-    }
-
-    private static boolean bool(JsonNode node, String field, String where) {
-        JsonNode value = node.get(field);
-        if (value == null || !value.isBoolean()) {
-            throw missing(field, where, "true or false");
-        }
-        return value.asBoolean();
-    }
-
-    private static TelltaleException missing(String field, String where, String what) {
-        return new TelltaleException("'" + field + "'" + (where.isEmpty() ? "" : " in " + where) + " must be " + what);
+    private static void readTexts(JsonValue documents, String field, Map<String, String> out) {
+        documents.find(field).ifPresent(texts -> texts.requireObject().fields()
+                .forEach((id, text) -> out.put(id, text.asString())));
     }
 }

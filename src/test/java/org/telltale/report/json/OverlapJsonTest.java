@@ -73,4 +73,27 @@ class OverlapJsonTest {
         TelltaleException missing = assertThrows(TelltaleException.class, () -> OverlapJson.fromJson(broken));
         assertTrue(missing.getMessage().contains("similarity") && missing.getMessage().contains("pairs[1]"), missing.getMessage());
     }
+
+    private static String message(String json) {
+        return assertThrows(org.telltale.json.ContractException.class, () -> OverlapJson.fromJson(json)).getMessage();
+    }
+
+    @Test
+    void aMissingFieldIsNamedWithItsPath() {
+        String json = OverlapJson.toJson(sample()).replace("\"train_seen\" : 2,", "");
+        assertEquals("overlap result: summary.train_seen: missing", message(json));
+    }
+
+    @Test
+    void aMistypedFieldIsNamedWithWhatWasFound() {
+        String json = OverlapJson.toJson(sample()).replace("\"similarity\" : 0.85", "\"similarity\" : \"high\"");
+        assertEquals("overlap result: pairs[1].similarity: expected a number, found the string \"high\"", message(json));
+    }
+
+    @Test
+    void anotherVersionIsRefusedByTheOneVersionCheck() {
+        String json = OverlapJson.toJson(sample()).replace("\"version\" : 1", "\"version\" : 2");
+        assertEquals("overlap result: version: telltale.overlap version 2 is not supported (this Telltale reads version 1)",
+                message(json));
+    }
 }
