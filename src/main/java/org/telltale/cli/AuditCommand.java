@@ -96,6 +96,7 @@ final class AuditCommand implements Callable<Integer> {
                 .withAnalyzer(analyzer.spec()).withTarget(Target.PROBABILITY); // the audit's rules are set in probability
         Auditor.Progress progress = AuditProgressBar.forTerminal(quiet);
         Auditor.Outcome outcome;
+        String concurrency;
         try (TextClassifier classifier = model.open()) {
             RunFingerprint fingerprint = RunFingerprint.of(RunFingerprint.corpus(corpus.path()),
                     ModelIdentity.of(model.settings()), seed, settings, policy == null ? null : RunFingerprint.sha256(policy),
@@ -109,6 +110,8 @@ final class AuditCommand implements Callable<Integer> {
             } finally {
                 progress.done();
             }
+            concurrency = classifier.concurrency();
+            ModelOptions.reportConcurrency(classifier, common.verbose, spec.commandLine().getErr());
         }
         List<String> files = new ArrayList<>();
         files.add(folder.write(OutputFolder.EXPLANATIONS, outcome.explanations().stream()
@@ -120,7 +123,7 @@ final class AuditCommand implements Callable<Integer> {
         if (sarif != null) {
             files.add(SarifOutput.write(result, sarif, true, corpus.path(), corpus::open).toString());
         }
-        AuditPrinter.print(spec.commandLine().getOut(), result, files);
+        AuditPrinter.print(spec.commandLine().getOut(), result, files, concurrency);
         return gate != null && !result.open(gate).isEmpty() ? ExitCodes.GATE : ExitCodes.OK;
     }
 

@@ -16,12 +16,20 @@ final class AuditPrinter {
     }
 
     static void print(PrintWriter out, AuditResult result, List<String> files) {
+        print(out, result, files, "");
+    }
+
+    /** {@code concurrency}: the connector's account of its requests in flight (e.g. where auto settled), or "". */
+    static void print(PrintWriter out, AuditResult result, List<String> files, String concurrency) {
         AuditResult.Summary s = result.summary();
         out.printf(Locale.ROOT, "audited %d documents, explained %d; labels %s%s%n", s.documents(), s.explained(),
                 String.join(", ", s.labels()),
                 s.accuracy() == null ? "" : String.format(Locale.ROOT, "; accuracy %.3f", s.accuracy()));
         if (s.skipped() > 0 || s.retries() > 0) {
             out.printf(Locale.ROOT, "skipped %d bad records; the model needed %d retries%n", s.skipped(), s.retries());
+        }
+        if (!concurrency.isEmpty()) {
+            out.println("model " + concurrency);
         }
         List<Finding> findings = result.findings();
         long open = findings.stream().filter(f -> !f.suppressed()).count();

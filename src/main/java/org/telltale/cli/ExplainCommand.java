@@ -120,6 +120,7 @@ final class ExplainCommand implements Callable<Integer> {
                     out.flush();
                 }
             }
+            ModelOptions.reportConcurrency(classifier, common.verbose, err);
         }
         if (jsonOnStdout) {
             out.print(ExplanationsJson.toJson(explanations));

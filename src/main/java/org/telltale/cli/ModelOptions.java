@@ -33,10 +33,15 @@ public final class ModelOptions {
             description = "Most texts per request. Default: ${DEFAULT-VALUE}.")
     int batch;
 
-    @Option(names = "--parallel", paramLabel = "N", defaultValue = "0",
-            description = "Requests in flight (subprocesses for exec:). Default: 4 for URLs, 1 for exec:, "
-                    + "up to 4 threads for model files.")
-    int parallel;
+    @Option(names = "--parallel", paramLabel = "N|auto", defaultValue = "auto",
+            description = "Requests in flight (subprocesses for exec:), or auto: find the service's capacity from "
+                    + "its latency and its 429/503 answers, up to --parallel-max requests (for exec:, processes up "
+                    + "to the cores available). Model files use up to 4 threads. Default: ${DEFAULT-VALUE}.")
+    String parallel;
+
+    @Option(names = "--parallel-max", paramLabel = "N", defaultValue = "" + ConnectorSettings.DEFAULT_PARALLEL_MAX,
+            description = "The most requests in flight --parallel auto may reach. Default: ${DEFAULT-VALUE}.")
+    int parallelMax;
 
     @Option(names = "--timeout", paramLabel = "DURATION", defaultValue = "30s", converter = DurationConverter.class,
             description = "How long one request may take, e.g. 500ms, 30s, 2m. Default: ${DEFAULT-VALUE}.")
@@ -67,23 +72,64 @@ public final class ModelOptions {
         if (batch < 1) {
             throw new UsageException("--batch must be at least 1: " + batch);
         }
-        if (parallel < 0) {
-            throw new UsageException("--parallel must be at least 1: " + parallel);
-        }
+        int inFlight = parallelValue();
         if (retries < 0) {
             throw new UsageException("--retries must be 0 or more: " + retries);
         }
         if (timeout.isZero() || timeout.isNegative()) {
             throw new UsageException("--timeout must be positive: " + Durations.format(timeout));
         }
-        return ConnectorSettings.of(spec).withProtocol(protocol).withBatch(batch).withParallel(parallel)
-                .withTimeout(timeout).withRetries(retries).withHeaders(headers).withScores(scores)
-                .withLabels(labels == null ? List.of() : labels);
+        try {
+            return ConnectorSettings.of(spec).withProtocol(protocol).withBatch(batch).withParallel(inFlight)
+                    .withParallelMax(parallelMax).withTimeout(timeout).withRetries(retries).withHeaders(headers)
+                    .withScores(scores).withLabels(labels == null ? List.of() : labels);
+        } catch (IllegalArgumentException e) {
+            throw new UsageException(optionWords(e.getMessage()));
+        }
+    }
+
+    /** {@code --parallel}: a count of at least 1, or {@code auto}. */
+    private int parallelValue() {
+        String v = parallel == null ? "auto" : parallel.strip();
+        if (v.equalsIgnoreCase("auto")) {
+            return ConnectorSettings.AUTO;
+        }
+        int n;
+        try {
+            n = Integer.parseInt(v);
+        } catch (NumberFormatException e) {
+            throw new UsageException("--parallel must be a number or auto: " + parallel);
+        }
+        if (n < 1) {
+            throw new UsageException(optionWords("parallel must be at least 1: " + n));
+        }
+        return n;
+    }
+
+    /** A setting's message in the core's words ("parallelMax must be …") with the option's name instead. */
+    static String optionWords(String message) {
+        String[][] names = {{"parallelMax", "--parallel-max"}, {"parallel", "--parallel"}, {"batch", "--batch"},
+            {"retries", "--retries"}, {"timeout", "--timeout"}};
+        for (String[] n : names) {
+            if (message.startsWith(n[0] + " ")) {
+                return n[1] + message.substring(n[0].length());
+            }
+        }
+        return message;
     }
 
     /** Opens the connector; the caller closes it. */
     public TextClassifier open() {
         return Connectors.open(settings());
+    }
+
+    /** Under {@code --verbose}, prints on stderr how many requests the connector kept in flight (for auto, where it settled). */
+    static void reportConcurrency(TextClassifier classifier, boolean verbose, java.io.PrintWriter err) {
+        String line = classifier.concurrency();
+        if (verbose && !line.isEmpty()) {
+            err.println("model: " + line);
+            err.flush();
+        }
     }
 
     /** The spec as given, for messages. */

@@ -112,6 +112,7 @@ final class ScoreCommand implements Callable<Integer> {
             if (!reader.skipped().isEmpty()) {
                 stderr.println("telltale: " + reader.skipped().summary());
             }
+            ModelOptions.reportConcurrency(classifier, common.verbose, stderr);
         }
         PrintWriter report = out == null ? stderr : stdout;
         if (out != null) {

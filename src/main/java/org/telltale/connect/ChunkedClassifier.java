@@ -5,10 +5,12 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
+import java.util.Locale;
 import java.util.concurrent.Future;
+import java.util.concurrent.LinkedBlockingQueue;
 import java.util.concurrent.ThreadFactory;
+import java.util.concurrent.ThreadPoolExecutor;
+import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicLong;
 import org.telltale.TelltaleException;
@@ -18,30 +20,48 @@ import org.telltale.model.TextClassifier;
 
 /**
  * The {@link TextClassifier} every connector hands out: it splits whatever the caller passes into
- * batches of at most {@code batch} texts, keeps up to {@code parallel} of them in flight, retries
- * transient failures with backoff, validates every answer and puts the rows back in the caller's
- * order. Thread-safe; calls from several threads share the same in-flight limit.
+ * batches of at most {@code batch} texts, keeps requests in flight as its {@link InFlightGate}
+ * admits them (a fixed number, or an {@link AdaptiveLimit} that finds the service's capacity),
+ * retries transient failures with backoff, validates every answer and puts the rows back in the
+ * caller's order. Thread-safe; calls from several threads share the same gate.
+ *
+ * <p>Each batch runs on a worker that encodes it before asking the gate for a place, so a
+ * prepared request is waiting whenever a place frees, and decodes and validates the answer after
+ * giving its place back. There are a few more workers than the most places the gate can give,
+ * which bounds the prepared requests held in memory.
  */
 final class ChunkedClassifier implements TextClassifier {
+    /** Workers beyond the gate's largest limit: requests prepared and waiting for a place. */
+    static final int PREPARED_AHEAD = 4;
+
     private final BatchScorer scorer;
     private final int batch;
-    private final int parallel;
+    private final InFlightGate gate;
+    private final String unit;
     private final RetryPolicy retryPolicy;
     private final ResponseValidator validator;
     private final Redactor redactor;
     private final String description;
-    private final ExecutorService pool;
+    private final ThreadPoolExecutor pool;
     private final AtomicLong retries = new AtomicLong();
 
     ChunkedClassifier(BatchScorer scorer, ConnectorSettings settings, Redactor redactor, String description) {
+        this(scorer, settings, settings.gatePolicy(), redactor, description);
+    }
+
+    ChunkedClassifier(BatchScorer scorer, ConnectorSettings settings, InFlightGate.Policy policy, Redactor redactor,
+            String description) {
         this.scorer = scorer;
         this.batch = settings.batch();
-        this.parallel = settings.effectiveParallel();
+        this.gate = new InFlightGate(policy);
+        this.unit = settings.kind() == ConnectorSettings.Kind.SUBPROCESS ? "processes" : "requests";
         this.retryPolicy = new RetryPolicy(settings.retries(), settings.backoff());
         this.validator = new ResponseValidator(settings.scores());
         this.redactor = redactor;
         this.description = redactor.redact(description);
-        this.pool = Executors.newFixedThreadPool(parallel, daemonThreads());
+        int workers = policy.max() + PREPARED_AHEAD;
+        this.pool = new ThreadPoolExecutor(workers, workers, 30, TimeUnit.SECONDS, new LinkedBlockingQueue<>(), daemonThreads());
+        this.pool.allowCoreThreadTimeOut(true);
     }
 
     @Override
@@ -62,7 +82,7 @@ final class ChunkedClassifier implements TextClassifier {
             int from = offset;
             int to = Math.min(n, offset + batch);
             var place = new ResponseValidator.BatchPlace(from / batch + 1, from, to - from, ids, redactor);
-            List<String> chunk = List.copyOf(texts.subList(from, to));
+            List<String> chunk = texts.subList(from, to);
             pending.add(pool.submit(() -> {
                 double[][] partLogits = logits == null ? null : new double[chunk.size()][];
                 double[][] part = scoreWithRetries(chunk, place, partLogits);
@@ -79,35 +99,71 @@ final class ChunkedClassifier implements TextClassifier {
     }
 
     private double[][] scoreWithRetries(List<String> chunk, ResponseValidator.BatchPlace place, double[][] logits) {
-        for (int attempt = 0; ; attempt++) {
-            if (Thread.currentThread().isInterrupted()) {
-                throw new CancellationException();
-            }
-            RawScores raw;
-            try {
-                raw = scorer.score(chunk);
-            } catch (MalformedResponse bad) {
-                throw new ClassifierException(redactor.redact(place.name() + ": " + bad.getMessage()));
-            } catch (ClassifierException e) {
-                // A final failure (e.g. HTTP 400): name the batch, and make sure no secret travels on.
-                throw new ClassifierException(redactor.redact(place.name() + ": " + e.getMessage()), e.getCause());
-            } catch (TransientFailure failure) {
-                if (attempt >= retryPolicy.retries()) {
-                    throw new ClassifierException(redactor.redact(place.name() + ": " + failure.getMessage()
-                            + (attempt == 0 ? "" : " (after " + attempt + (attempt == 1 ? " retry)" : " retries)"))),
-                            failure.getCause());
+        BatchScorer.Exchange exchange = scorer.prepare(chunk);
+        InFlightGate.Ticket kept = null;
+        try {
+            for (int attempt = 0; ; attempt++) {
+                if (Thread.currentThread().isInterrupted()) {
+                    throw new CancellationException();
                 }
-                Duration wait = retryPolicy.delay(attempt, failure.retryAfter());
-                if (failure.retryAfter() != null && failure.retryAfter().compareTo(RetryPolicy.MAX_RETRY_AFTER) > 0) {
-                    throw new ClassifierException(redactor.redact(place.name() + ": the model asks to retry after "
-                            + failure.retryAfter().toSeconds() + " s, longer than the "
-                            + RetryPolicy.MAX_RETRY_AFTER.toSeconds() + " s Telltale waits; " + failure.getMessage()));
+                InFlightGate.Ticket ticket = kept != null ? gate.again(kept) : admit();
+                kept = null;
+                BatchScorer.Reply reply;
+                try {
+                    reply = exchange.send();
+                } catch (TransientFailure failure) {
+                    // A retry keeps its place unless the service named a delay (Retry-After): then the
+                    // place goes to work the service can take now.
+                    boolean retry = attempt < retryPolicy.retries();
+                    boolean keep = retry && failure.retryAfter() == null;
+                    gate.failed(ticket, failure.overload(), keep);
+                    kept = keep ? ticket : null;
+                    if (!retry) {
+                        throw new ClassifierException(redactor.redact(place.name() + ": " + failure.getMessage()
+                                + (attempt == 0 ? "" : " (after " + attempt + (attempt == 1 ? " retry)" : " retries)"))),
+                                failure.getCause());
+                    }
+                    if (failure.retryAfter() != null && failure.retryAfter().compareTo(RetryPolicy.MAX_RETRY_AFTER) > 0) {
+                        throw new ClassifierException(redactor.redact(place.name() + ": the model asks to retry after "
+                                + failure.retryAfter().toSeconds() + " s, longer than the "
+                                + RetryPolicy.MAX_RETRY_AFTER.toSeconds() + " s Telltale waits; " + failure.getMessage()));
+                    }
+                    retries.incrementAndGet();
+                    sleep(retryPolicy.delay(attempt, failure.retryAfter()));
+                    continue;
+                } catch (MalformedResponse bad) {
+                    gate.failed(ticket, TransientFailure.Overload.NONE);
+                    throw new ClassifierException(redactor.redact(place.name() + ": " + bad.getMessage()));
+                } catch (ClassifierException e) {
+                    gate.failed(ticket, TransientFailure.Overload.NONE);
+                    // A final failure (e.g. HTTP 400): name the batch, and make sure no secret travels on.
+                    throw new ClassifierException(redactor.redact(place.name() + ": " + e.getMessage()), e.getCause());
+                } catch (RuntimeException | Error e) {
+                    gate.failed(ticket, TransientFailure.Overload.NONE);
+                    throw e;
                 }
-                retries.incrementAndGet();
-                sleep(wait);
-                continue;
+                gate.answered(ticket, chunk.size(), reply.measured());
+                RawScores raw;
+                try {
+                    raw = reply.decode();
+                } catch (MalformedResponse bad) {
+                    throw new ClassifierException(redactor.redact(place.name() + ": " + bad.getMessage()));
+                }
+                return validator.validate(raw, chunk.size(), place, logits);
             }
-            return validator.validate(raw, chunk.size(), place, logits);
+        } finally {
+            if (kept != null) {
+                gate.release(kept);
+            }
+        }
+    }
+
+    private InFlightGate.Ticket admit() {
+        try {
+            return gate.admit();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new CancellationException();
         }
     }
 
@@ -147,6 +203,24 @@ final class ChunkedClassifier implements TextClassifier {
     @Override
     public long retries() {
         return retries.get();
+    }
+
+    /**
+     * How many requests (processes, for {@code exec:}) were in flight: for {@code auto}, the level
+     * the limit settled at (the one in force longest while requests were in flight) and the peak.
+     */
+    @Override
+    public String concurrency() {
+        if (!gate.adaptive()) {
+            return String.format(Locale.ROOT, "%s in flight: %d (fixed)", unit, gate.max());
+        }
+        return String.format(Locale.ROOT, "%s in flight: auto, settled at %d (peak %d, at most %d)", unit, gate.settled(),
+                gate.peak(), gate.max());
+    }
+
+    /** The gate's current limit. */
+    int limit() {
+        return gate.limit();
     }
 
     /** The labels the first answer fixed, or null before any answer. */

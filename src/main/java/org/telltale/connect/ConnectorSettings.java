@@ -14,7 +14,9 @@ import java.util.function.UnaryOperator;
  * @param spec        a model file path, an {@code http://}/{@code https://} URL, or {@code exec:COMMAND ARGS…}
  * @param protocol    the JSON exchange for URLs; ignored for files and subprocesses
  * @param batch       most texts per request (≥ 1)
- * @param parallel    requests in flight (≥ 1), or 0 for a default that suits the connector
+ * @param parallel    requests in flight (≥ 1), or {@link #AUTO}: for URLs and {@code exec:}, an
+ *                    adaptive limit that finds the service's capacity; for model files, threads to suit the cores
+ * @param parallelMax the most requests (processes) in flight that {@link #AUTO} may reach (≥ 1)
  * @param timeout     how long one request may take before it is abandoned (and retried)
  * @param retries     how many times a failed request is retried (≥ 0)
  * @param headers     HTTP header name → name of the environment variable holding its value
@@ -29,6 +31,7 @@ public record ConnectorSettings(
         Protocol protocol,
         int batch,
         int parallel,
+        int parallelMax,
         Duration timeout,
         int retries,
         Map<String, String> headers,
@@ -43,6 +46,11 @@ public record ConnectorSettings(
     public static final int DEFAULT_RETRIES = 3;
     public static final Duration DEFAULT_BACKOFF = Duration.ofMillis(200);
     public static final int DEFAULT_MAX_RESTARTS = 10;
+    /** {@link #parallel} for an adaptive limit. */
+    public static final int AUTO = 0;
+    public static final int DEFAULT_PARALLEL_MAX = 64;
+    /** Where an adaptive limit starts for a URL: a guess that slow start corrects within a few answers. */
+    static final int AUTO_START_HTTP = 4;
 
     public ConnectorSettings {
         Objects.requireNonNull(spec, "spec");
@@ -58,7 +66,10 @@ public record ConnectorSettings(
             throw new IllegalArgumentException("batch must be at least 1: " + batch);
         }
         if (parallel < 0) {
-            throw new IllegalArgumentException("parallel must be 0 (default) or more: " + parallel);
+            throw new IllegalArgumentException("parallel must be at least 1: " + parallel);
+        }
+        if (parallelMax < 1) {
+            throw new IllegalArgumentException("parallelMax must be at least 1: " + parallelMax);
         }
         if (retries < 0) {
             throw new IllegalArgumentException("retries must be 0 or more: " + retries);
@@ -75,57 +86,61 @@ public record ConnectorSettings(
 
     /** Defaults for everything but the spec: native protocol, batch 64, 30 s timeout, 3 retries. */
     public static ConnectorSettings of(String spec) {
-        return new ConnectorSettings(spec, Protocol.NATIVE, DEFAULT_BATCH, 0, DEFAULT_TIMEOUT, DEFAULT_RETRIES,
+        return new ConnectorSettings(spec, Protocol.NATIVE, DEFAULT_BATCH, AUTO, DEFAULT_PARALLEL_MAX, DEFAULT_TIMEOUT, DEFAULT_RETRIES,
                 Map.of(), ScoreKind.PROBABILITIES, List.of(), DEFAULT_BACKOFF, DEFAULT_MAX_RESTARTS, System::getenv);
     }
 
     /** The same options for another model spec. */
     public ConnectorSettings withSpecOf(String otherSpec) {
-        return new ConnectorSettings(otherSpec, protocol, batch, parallel, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
+        return new ConnectorSettings(otherSpec, protocol, batch, parallel, parallelMax, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
     }
 
     public ConnectorSettings withProtocol(Protocol p) {
-        return new ConnectorSettings(spec, p, batch, parallel, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
+        return new ConnectorSettings(spec, p, batch, parallel, parallelMax, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
     }
 
     public ConnectorSettings withBatch(int n) {
-        return new ConnectorSettings(spec, protocol, n, parallel, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
+        return new ConnectorSettings(spec, protocol, n, parallel, parallelMax, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
     }
 
     public ConnectorSettings withParallel(int n) {
-        return new ConnectorSettings(spec, protocol, batch, n, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
+        return new ConnectorSettings(spec, protocol, batch, n, parallelMax, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
+    }
+
+    public ConnectorSettings withParallelMax(int n) {
+        return new ConnectorSettings(spec, protocol, batch, parallel, n, timeout, retries, headers, scores, labels, backoff, maxRestarts, environment);
     }
 
     public ConnectorSettings withTimeout(Duration d) {
-        return new ConnectorSettings(spec, protocol, batch, parallel, d, retries, headers, scores, labels, backoff, maxRestarts, environment);
+        return new ConnectorSettings(spec, protocol, batch, parallel, parallelMax, d, retries, headers, scores, labels, backoff, maxRestarts, environment);
     }
 
     public ConnectorSettings withRetries(int n) {
-        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, n, headers, scores, labels, backoff, maxRestarts, environment);
+        return new ConnectorSettings(spec, protocol, batch, parallel, parallelMax, timeout, n, headers, scores, labels, backoff, maxRestarts, environment);
     }
 
     public ConnectorSettings withHeaders(Map<String, String> h) {
-        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, h, scores, labels, backoff, maxRestarts, environment);
+        return new ConnectorSettings(spec, protocol, batch, parallel, parallelMax, timeout, retries, h, scores, labels, backoff, maxRestarts, environment);
     }
 
     public ConnectorSettings withScores(ScoreKind k) {
-        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, headers, k, labels, backoff, maxRestarts, environment);
+        return new ConnectorSettings(spec, protocol, batch, parallel, parallelMax, timeout, retries, headers, k, labels, backoff, maxRestarts, environment);
     }
 
     public ConnectorSettings withLabels(List<String> l) {
-        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, headers, scores, l, backoff, maxRestarts, environment);
+        return new ConnectorSettings(spec, protocol, batch, parallel, parallelMax, timeout, retries, headers, scores, l, backoff, maxRestarts, environment);
     }
 
     public ConnectorSettings withBackoff(Duration d) {
-        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, headers, scores, labels, d, maxRestarts, environment);
+        return new ConnectorSettings(spec, protocol, batch, parallel, parallelMax, timeout, retries, headers, scores, labels, d, maxRestarts, environment);
     }
 
     public ConnectorSettings withMaxRestarts(int n) {
-        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, headers, scores, labels, backoff, n, environment);
+        return new ConnectorSettings(spec, protocol, batch, parallel, parallelMax, timeout, retries, headers, scores, labels, backoff, n, environment);
     }
 
     public ConnectorSettings withEnvironment(UnaryOperator<String> env) {
-        return new ConnectorSettings(spec, protocol, batch, parallel, timeout, retries, headers, scores, labels, backoff, maxRestarts, env);
+        return new ConnectorSettings(spec, protocol, batch, parallel, parallelMax, timeout, retries, headers, scores, labels, backoff, maxRestarts, env);
     }
 
     /** The connector this spec selects. */
@@ -139,16 +154,37 @@ public record ConnectorSettings(
         return Kind.FILE;
     }
 
-    /** {@link #parallel} with 0 resolved to a default that suits the connector. */
+    /** Whether requests in flight follow an adaptive limit: {@link #AUTO} for a URL or {@code exec:}. */
+    public boolean adaptive() {
+        return parallel == AUTO && kind() != Kind.FILE;
+    }
+
+    /**
+     * The most requests (processes) in flight: {@link #parallel} when fixed; for {@link #AUTO},
+     * {@link #parallelMax} for URLs, and as many processes as there are cores (at most
+     * {@code parallelMax}) for {@code exec:}, since more processes than cores only queue for them;
+     * for model files, threads up to 4 to suit the cores.
+     */
     public int effectiveParallel() {
         if (parallel > 0) {
             return parallel;
         }
+        int cores = Runtime.getRuntime().availableProcessors();
         return switch (kind()) {
-            case HTTP -> 4;
-            case SUBPROCESS -> 1;
-            case FILE -> Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
+            case HTTP -> parallelMax;
+            case SUBPROCESS -> Math.max(1, Math.min(parallelMax, cores));
+            case FILE -> Math.max(1, Math.min(4, cores));
         };
+    }
+
+    /** The in-flight policy these settings describe. */
+    InFlightGate.Policy gatePolicy() {
+        if (!adaptive()) {
+            return InFlightGate.fixed(effectiveParallel());
+        }
+        // A subprocess starts at one process (more cost memory and start-up); a URL at a few requests.
+        int start = kind() == Kind.SUBPROCESS ? 1 : AUTO_START_HTTP;
+        return new AdaptiveLimit(start, effectiveParallel());
     }
 
     /** The three ways to reach a model. */

@@ -98,7 +98,8 @@ public final class Connectors {
     }
 
     private static String options(ConnectorSettings s) {
-        return String.format(Locale.ROOT, "batch %d, %d in flight, timeout %s, %d retries%s", s.batch(), s.effectiveParallel(),
+        String inFlight = s.adaptive() ? "auto in flight (at most " + s.effectiveParallel() + ")" : s.effectiveParallel() + " in flight";
+        return String.format(Locale.ROOT, "batch %d, %s, timeout %s, %d retries%s", s.batch(), inFlight,
                 Durations.format(s.timeout()), s.retries(), s.scores() == ScoreKind.LOGITS ? ", logits" : "");
     }
 }

@@ -17,8 +17,23 @@ final class HttpScorer implements BatchScorer {
 
     @Override
     public RawScores score(List<String> texts) {
-        URI target = format.target(transport);
-        return format.parse(transport.post(target, format.request(texts)), texts.size());
+        return prepare(texts).send().decode();
+    }
+
+    /** Encodes the batch now when the format is ready (Open Inference needs its metadata first). */
+    @Override
+    public Exchange prepare(List<String> texts) {
+        byte[] early = format.ready() ? format.request(texts) : null;
+        return () -> {
+            URI target = format.target(transport);
+            byte[] answer = transport.post(target, early != null ? early : format.request(texts));
+            return () -> format.parse(answer, texts.size());
+        };
+    }
+
+    /** Requests sent again on a fresh connection after the server closed a reused one. */
+    long resent() {
+        return transport.resent();
     }
 
     @Override
@@ -35,6 +50,11 @@ final class HttpScorer implements BatchScorer {
     interface WireFormat {
         /** The URL to post to; may first fetch what the protocol needs (e.g. metadata), retried like any request. */
         URI target(HttpTransport transport);
+
+        /** Whether {@link #request} can be written before {@link #target} was called. */
+        default boolean ready() {
+            return true;
+        }
 
         byte[] request(List<String> texts);
 

@@ -99,7 +99,8 @@ final class HttpTransport implements AutoCloseable {
             }
         } catch (SocketTimeoutException e) {
             discard(pool, c);
-            throw new TransientFailure("no answer from " + where + " within " + Durations.format(timeout), null, e, true);
+            throw new TransientFailure("no answer from " + where + " within " + Durations.format(timeout), null, e,
+                    TransientFailure.Overload.TIMED_OUT);
         } catch (ConnectException e) {
             discard(pool, c);
             throw new TransientFailure("cannot connect to " + where + " (" + describe(e) + ")", e);
@@ -139,8 +140,8 @@ final class HttpTransport implements AutoCloseable {
         if (status == 429 || status == 408 || status / 100 == 5) {
             Duration after = RetryPolicy.parseRetryAfter(answer.header("retry-after"), ZonedDateTime.now(ZoneOffset.UTC));
             // 429 and 503 are the service saying it is over capacity; 500 and others are faults.
-            boolean overload = status == 429 || status == 503;
-            throw new TransientFailure(detail, after, null, overload);
+            boolean rejected = status == 429 || status == 503;
+            throw new TransientFailure(detail, after, null, rejected ? TransientFailure.Overload.REJECTED : TransientFailure.Overload.NONE);
         }
         throw new ClassifierException(detail);
     }

@@ -30,6 +30,7 @@ final class ModelProcess implements AutoCloseable {
     private final ArrayDeque<Character> stderrTail = new ArrayDeque<>();
     private final String name;
     private final Thread stderrReader;
+    private int exchanges;
 
     private ModelProcess(Process process, String name) {
         this.process = process;
@@ -69,6 +70,7 @@ final class ModelProcess implements AutoCloseable {
 
     /** Sends one request line and waits for one answer line, at most {@code timeout}. */
     Answer exchange(byte[] request, Duration timeout) throws InterruptedException {
+        exchanges++;
         try {
             stdin.write(request);
             stdin.write('\n');
@@ -169,6 +171,11 @@ final class ModelProcess implements AutoCloseable {
         }
         String s = sb.toString().strip();
         return s.isEmpty() ? "" : "; its stderr ends: " + s.replaceAll("\\s*\\R\\s*", " | ");
+    }
+
+    /** How many requests were sent to this process. */
+    int exchanges() {
+        return exchanges;
     }
 
     boolean isAlive() {

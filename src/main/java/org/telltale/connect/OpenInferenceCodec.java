@@ -65,6 +65,11 @@ final class OpenInferenceCodec implements HttpScorer.WireFormat {
     }
 
     @Override
+    public boolean ready() {
+        return metadata != null;
+    }
+
+    @Override
     public byte[] request(List<String> texts) {
         ObjectNode root = Json.MAPPER.createObjectNode();
         ObjectNode tensor = root.putArray("inputs").addObject();

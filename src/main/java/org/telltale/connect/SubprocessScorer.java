@@ -44,10 +44,23 @@ final class SubprocessScorer implements BatchScorer {
 
     @Override
     public RawScores score(List<String> texts) {
+        return prepare(texts).send().decode();
+    }
+
+    /** Encodes the request line now; the exchange borrows a process. */
+    @Override
+    public Exchange prepare(List<String> texts) {
+        byte[] line = NativeCodec.request(texts);
+        return () -> exchange(line);
+    }
+
+    private Reply exchange(byte[] request) {
         ModelProcess p = borrow();
         boolean keep = false;
+        // The first answer of a new process includes its start-up: no measure of the model's load.
+        boolean warm = p.exchanges() > 0;
         try {
-            ModelProcess.Answer answer = p.exchange(NativeCodec.request(texts), timeout);
+            ModelProcess.Answer answer = p.exchange(request, timeout);
             if (answer instanceof ModelProcess.Line line) {
                 RawScores raw;
                 try {
@@ -58,7 +71,7 @@ final class SubprocessScorer implements BatchScorer {
                             + bad.getMessage() + p.stderrTail());
                 }
                 keep = true;
-                return raw;
+                return Reply.of(raw, warm);
             }
             p.kill();
             lastProblem = "; the last failure: " + describe(answer) + p.stderrTail();
@@ -71,7 +84,8 @@ final class SubprocessScorer implements BatchScorer {
                         + ModelProcess.MAX_LINE_CHARS + " characters" + p.stderrTail());
             }
             throw new TransientFailure("the subprocess " + name + " did not answer within "
-                    + Durations.format(timeout) + " and was killed" + p.stderrTail(), null, null, true);
+                    + Durations.format(timeout) + " and was killed" + p.stderrTail(), null, null,
+                    TransientFailure.Overload.TIMED_OUT);
         } catch (InterruptedException e) {
             p.kill();
             Thread.currentThread().interrupt();

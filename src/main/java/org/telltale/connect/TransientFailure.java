@@ -11,24 +11,34 @@ import java.time.Duration;
 final class TransientFailure extends RuntimeException {
     private static final long serialVersionUID = 1L;
     private final transient Duration retryAfter;
-    private final boolean overload;
+    private final Overload overload;
 
-    TransientFailure(String message, Duration retryAfter, Throwable cause, boolean overload) {
+    /** What a failure says about the service's capacity. */
+    enum Overload {
+        /** Nothing: a reset, a refused connection, a 500, a crash. */
+        NONE,
+        /** The service refused the request for now: 429 or 503. */
+        REJECTED,
+        /** No answer within the timeout. */
+        TIMED_OUT
+    }
+
+    TransientFailure(String message, Duration retryAfter, Throwable cause, Overload overload) {
         super(message, cause);
         this.retryAfter = retryAfter;
         this.overload = overload;
     }
 
     TransientFailure(String message, Duration retryAfter, Throwable cause) {
-        this(message, retryAfter, cause, false);
+        this(message, retryAfter, cause, Overload.NONE);
     }
 
     TransientFailure(String message) {
-        this(message, null, null, false);
+        this(message, null, null, Overload.NONE);
     }
 
     TransientFailure(String message, Throwable cause) {
-        this(message, null, cause, false);
+        this(message, null, cause, Overload.NONE);
     }
 
     /** The delay the service asked for, or null when it named none. */
@@ -36,8 +46,8 @@ final class TransientFailure extends RuntimeException {
         return retryAfter;
     }
 
-    /** Whether the service signalled it is over capacity: 429, 503 or no answer in time. */
-    boolean overload() {
+    /** Whether, and how, the service signalled it is over capacity: 429, 503 or no answer in time. */
+    Overload overload() {
         return overload;
     }
 }

@@ -32,6 +32,14 @@ public interface TextClassifier extends AutoCloseable {
         return 0;
     }
 
+    /**
+     * How many requests the connector kept in flight, one line for run summaries (e.g. the level
+     * an adaptive limit settled at); empty when that does not apply.
+     */
+    default String concurrency() {
+        return "";
+    }
+
     /** A short description for logs and reports, e.g. the file name or URL; never a secret. */
     String describe();
 

@@ -1,6 +1,7 @@
 package org.telltale.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -38,7 +39,8 @@ class ModelOptionsTest {
         ConnectorSettings s = parse("--model", "http://127.0.0.1:1/score").settings();
         assertEquals(Protocol.NATIVE, s.protocol());
         assertEquals(64, s.batch());
-        assertEquals(4, s.effectiveParallel());
+        assertTrue(s.adaptive(), "--parallel auto is the default for URLs");
+        assertEquals(64, s.effectiveParallel());
         assertEquals(Duration.ofSeconds(30), s.timeout());
         assertEquals(3, s.retries());
         assertEquals(ScoreKind.PROBABILITIES, s.scores());
@@ -52,6 +54,7 @@ class ModelOptionsTest {
         assertEquals(Protocol.OPEN_INFERENCE, s.protocol());
         assertEquals(8, s.batch());
         assertEquals(2, s.parallel());
+        assertFalse(s.adaptive());
         assertEquals(Duration.ofMillis(500), s.timeout());
         assertEquals(0, s.retries());
         assertEquals(Map.of("Authorization", "MODEL_TOKEN", "X-Team", "TEAM"), s.headers());
@@ -65,6 +68,24 @@ class ModelOptionsTest {
         assertThrows(CommandLine.ParameterException.class, () -> parse("--model", "m", "--timeout", "soon"));
         assertThrows(UsageException.class, () -> parse("--model", "m", "--batch", "0").settings());
         assertThrows(CommandLine.ParameterException.class, () -> parse("--batch", "3"));
+        assertEquals("--parallel must be at least 1: 0",
+                assertThrows(UsageException.class, () -> parse("--model", "m", "--parallel", "0").settings()).getMessage());
+        assertEquals("--parallel-max must be at least 1: 0",
+                assertThrows(UsageException.class, () -> parse("--model", "m", "--parallel-max", "0").settings()).getMessage());
+        assertTrue(assertThrows(UsageException.class, () -> parse("--model", "m", "--parallel", "lots").settings())
+                .getMessage().contains("--parallel must be a number or auto: lots"));
+    }
+
+    @Test
+    void parallelAutoHasAMaximumAndExecStopsAtTheCores() {
+        ConnectorSettings url = parse("--model", "http://127.0.0.1:1/score", "--parallel", "auto", "--parallel-max", "12").settings();
+        assertTrue(url.adaptive());
+        assertEquals(12, url.effectiveParallel());
+        ConnectorSettings exec = parse("--model", "exec:python3 m.py").settings();
+        assertTrue(exec.adaptive());
+        assertEquals(Math.min(64, Runtime.getRuntime().availableProcessors()), exec.effectiveParallel());
+        ConnectorSettings file = parse("--model", "m.json").settings();
+        assertFalse(file.adaptive(), "model files run on a fixed number of threads");
     }
 
     @Test

@@ -25,8 +25,9 @@ import org.telltale.model.TextClassifier;
 class HttpFaultTest {
     private static final List<String> TEXTS = List.of("a", "bb", "ccc", "dddd", "eeeee");
 
+    /** Default in-flight settings (--parallel auto), so the whole matrix runs under the adaptive limit. */
     private static ConnectorSettings settings(String url, Protocol p) {
-        return ConnectorSettings.of(url).withProtocol(p).withBatch(5).withParallel(1).withRetries(3)
+        return ConnectorSettings.of(url).withProtocol(p).withBatch(5).withRetries(3)
                 .withTimeout(Duration.ofMillis(1500)).withBackoff(Duration.ofMillis(5));
     }
 

@@ -1,0 +1,210 @@
+package org.telltale.connect;
+
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.locks.Condition;
+import java.util.concurrent.locks.ReentrantLock;
+
+/**
+ * Admits requests while fewer than the policy's limit are in flight, in arrival order, and feeds
+ * each outcome back to the policy: a fixed limit ({@code --parallel N}) or {@link AdaptiveLimit}
+ * ({@code --parallel auto}). Also keeps how long each limit was in force while requests were in
+ * flight, for the level a run settled at. Thread-safe.
+ */
+final class InFlightGate {
+    /** Decides the limit from the outcomes; called under the gate's lock. */
+    interface Policy {
+        int limit();
+
+        int max();
+
+        boolean adaptive();
+
+        /** A request sent at {@code sentAt} with {@code inFlightAtSend} in flight was answered after {@code rtt}. */
+        default void answered(long now, long sentAt, long rtt, int size, int inFlightAtSend, boolean demandWaiting) {
+        }
+
+        /** A request was refused (429, 503) or timed out. */
+        default void overloaded(long now, long sentAt, int inFlightAtSend, boolean timedOut) {
+        }
+    }
+
+    /** A fixed limit. */
+    static Policy fixed(int n) {
+        if (n < 1) {
+            throw new IllegalArgumentException("parallel must be at least 1: " + n);
+        }
+        return new Policy() {
+            @Override
+            public int limit() {
+                return n;
+            }
+
+            @Override
+            public int max() {
+                return n;
+            }
+
+            @Override
+            public boolean adaptive() {
+                return false;
+            }
+        };
+    }
+
+    /** One admitted request: when it was sent and how many were in flight then, itself included. */
+    record Ticket(long sentAt, int inFlight) {
+    }
+
+    private final ReentrantLock lock = new ReentrantLock(true);
+    private final Condition freed = lock.newCondition();
+    private final Policy policy;
+    private final long[] nanosAtLimit;
+    private int inFlight;
+    private int waiting;
+    private int peak;
+    private long lastEvent = System.nanoTime();
+
+    InFlightGate(Policy policy) {
+        this.policy = policy;
+        this.nanosAtLimit = new long[policy.max() + 1];
+    }
+
+    /** Waits until the request may go, then counts it in flight. */
+    Ticket admit() throws InterruptedException {
+        lock.lockInterruptibly();
+        try {
+            waiting++;
+            try {
+                while (inFlight >= policy.limit()) {
+                    freed.await(1, TimeUnit.SECONDS);
+                }
+            } finally {
+                waiting--;
+            }
+            account();
+            inFlight++;
+            peak = Math.max(peak, inFlight);
+            return new Ticket(System.nanoTime(), inFlight);
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    /** The request was answered; {@code size} texts. {@code measured} false leaves the latency out (e.g. a process that had to start first). */
+    void answered(Ticket t, int size, boolean measured) {
+        lock.lock();
+        try {
+            long now = System.nanoTime();
+            account();
+            inFlight--;
+            if (measured) {
+                policy.answered(now, t.sentAt(), now - t.sentAt(), size, t.inFlight(), waiting > 0);
+            }
+            freed.signalAll();
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    /** The request failed; {@code overload} says whether the failure was the service being over capacity. */
+    void failed(Ticket t, TransientFailure.Overload overload) {
+        failed(t, overload, false);
+    }
+
+    /**
+     * The request failed; with {@code keepPlace} its place stays taken for its retry (see
+     * {@link #again}), so that a failing batch is retried before the next one starts, as with a
+     * single worker.
+     */
+    void failed(Ticket t, TransientFailure.Overload overload, boolean keepPlace) {
+        lock.lock();
+        try {
+            long now = System.nanoTime();
+            account();
+            if (!keepPlace) {
+                inFlight--;
+            }
+            if (overload != TransientFailure.Overload.NONE) {
+                policy.overloaded(now, t.sentAt(), t.inFlight(), overload == TransientFailure.Overload.TIMED_OUT);
+            }
+            freed.signalAll();
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    /** A retry in the place its failed attempt kept. */
+    Ticket again(Ticket kept) {
+        lock.lock();
+        try {
+            return new Ticket(System.nanoTime(), inFlight);
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    /** Gives back a place kept for a retry that will not happen. */
+    void release(Ticket kept) {
+        lock.lock();
+        try {
+            account();
+            inFlight--;
+            freed.signalAll();
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    private void account() {
+        long now = System.nanoTime();
+        if (inFlight > 0) {
+            nanosAtLimit[Math.min(policy.limit(), nanosAtLimit.length - 1)] += now - lastEvent;
+        }
+        lastEvent = now;
+    }
+
+    int limit() {
+        lock.lock();
+        try {
+            return policy.limit();
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    /** The limit in force longest while requests were in flight, or the current one before any request. */
+    int settled() {
+        lock.lock();
+        try {
+            int best = policy.limit();
+            long most = 0;
+            for (int i = 1; i < nanosAtLimit.length; i++) {
+                if (nanosAtLimit[i] > most) {
+                    most = nanosAtLimit[i];
+                    best = i;
+                }
+            }
+            return best;
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    /** The most requests that were in flight at once. */
+    int peak() {
+        lock.lock();
+        try {
+            return peak;
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    boolean adaptive() {
+        return policy.adaptive();
+    }
+
+    int max() {
+        return policy.max();
+    }
+}
