@@ -129,4 +129,32 @@ class ChunkedClassifierTest {
                     e.getMessage());
         }
     }
+
+    @Test
+    void anAdaptiveLimitGrowsWhileLatencyStaysFlatAndNeverPassesItsMaximum() {
+        // A model whose latency does not grow with load: every call takes 20 ms, however many run.
+        LengthModel model = new LengthModel(20);
+        ConnectorSettings settings = ConnectorSettings.of("mem").withBatch(1);
+        try (ChunkedClassifier c = new ChunkedClassifier(new InProcessScorer(model, false), settings, new AdaptiveLimit(1, 8),
+                Redactor.none(), "mem")) {
+            List<String> texts = new ArrayList<>();
+            for (int i = 0; i < 200; i++) {
+                texts.add("t".repeat(1 + i % 17));
+            }
+            ScoreMatrix m = c.score(texts);
+            for (int i = 0; i < texts.size(); i++) {
+                assertArrayEquals(LengthModel.expected(texts.get(i)), m.row(i), 1e-12);
+            }
+            assertTrue(model.maxInFlight.get() >= 4 && model.maxInFlight.get() <= 8, "at most " + model.maxInFlight.get());
+            assertTrue(c.concurrency().matches("requests in flight: auto, settled at [1-8] \\(peak [4-8], at most 8\\)"),
+                    c.concurrency());
+        }
+    }
+
+    @Test
+    void aFixedLimitSaysSo() {
+        try (TextClassifier c = Connectors.inProcess(new LengthModel(), ConnectorSettings.of("mem").withParallel(3))) {
+            assertEquals("requests in flight: 3 (fixed)", c.concurrency());
+        }
+    }
 }
