@@ -96,6 +96,28 @@ public final class Auditor {
         this.progress = progress == null ? Progress.SILENT : progress;
     }
 
+    /**
+     * What the decisions need from scoring the corpus, whether one stream produced it or a
+     * distributed front reduced it from partitions.
+     *
+     * @param predictedCounts documents per predicted label, in the model's label order
+     * @param repeats         the documents containing each long line (boilerplate)
+     * @param sampled         the sampled documents by id (the explained ones)
+     */
+    public record Scored(List<String> labels, long documents, long labelled, long correct, long skipped,
+                         Map<String, Long> predictedCounts, LineRepeats repeats, Map<String, Document> sampled) {
+    }
+
+    /** The corpus-wide term count, done where the corpus is. */
+    public interface TermCounting {
+        /**
+         * Counts {@code selected} over the corpus ({@link CorpusTerms#of} with the audit's
+         * analyzer and line counts), each document under its gold label when {@code gold}, else
+         * under its predicted label.
+         */
+        CorpusTerms count(Set<String> selected, List<String> labels, boolean gold);
+    }
+
     /** Runs the audit over {@code corpus} (opened afresh for each pass), journaling into {@code journal}. */
     public Outcome run(Supplier<CorpusReader> corpus, Journal journal, String model, String corpusName) {
         long started = System.nanoTime();
@@ -103,12 +125,35 @@ public final class Auditor {
 
         Scoring scoring = scoreCorpus(corpus, journal);
         List<Explanation> explanations = explainSample(corpus, journal, scoring);
-        List<String> labels = scoring.labels;
+        Scored scored = new Scored(scoring.labels, scoring.documents, scoring.labelled, scoring.correct, scoring.skipped,
+                scoring.predictedCounts(), scoring.repeats, scoring.documentsById);
+        TermCounting counting = (selected, labels, gold) -> countTerms(corpus, selected, labels, scoring, gold);
+        return decide(scored, explanations, counting, corpus,
+                () -> journal.retries() + (classifier.retries() - retriesSeen), model, corpusName, started);
+    }
+
+    /**
+     * Everything after explaining, on one machine: counts the selected terms (through
+     * {@code counting}), decides findings, scrubs and rescores the explained documents (or, with
+     * --scrub-all, the corpus from {@code scrubCorpus}), and picks documents for the reviewer.
+     * The single-machine audit and the Spark front both end here.
+     *
+     * @param scrubCorpus the corpus for --scrub-all; may be null when the audit does not scrub all
+     * @param retries     the retries of the whole run, read when the result is made
+     * @param started     {@link System#nanoTime()} at the start of the run
+     */
+    public Outcome decide(Scored scoring, List<Explanation> explanations, TermCounting counting,
+            Supplier<CorpusReader> scrubCorpus, java.util.function.LongSupplier retries, String model, String corpusName,
+            long started) {
+        if (settings.scrubAll() && scrubCorpus == null) {
+            throw new IllegalArgumentException("--scrub-all needs the corpus");
+        }
+        List<String> labels = scoring.labels();
 
         TermWeights weights = new TermWeights();
         explanations.forEach(weights::add);
-        boolean gold = scoring.labelled == scoring.documents;
-        CorpusTerms terms = countTerms(corpus, weights.terms(), labels, scoring, gold);
+        boolean gold = scoring.labelled() == scoring.documents();
+        CorpusTerms terms = counting.count(weights.terms(), labels, gold);
         Map<String, Double> prior = new LinkedHashMap<>();
         terms.labelTotals().forEach((label, n) -> {
             if (n > 0) {
@@ -117,9 +162,9 @@ public final class Auditor {
         });
 
         FindingRules.Outcome rules = FindingRules.apply(weights, terms, prior, policy, settings.alpha());
-        Rewriter rewriter = new Rewriter(analyzer, scoring.repeats::isBoilerplate);
+        Rewriter rewriter = new Rewriter(analyzer, scoring.repeats()::isBoilerplate);
         ScrubTest scrubTest = new ScrubTest(classifier, rewriter, settings.batch());
-        List<ScrubTest.Scored> explained = scored(explanations, labels, scoring.documentsById);
+        List<ScrubTest.Scored> explained = scored(explanations, labels, scoring.sampled());
 
         progress.phase("scrubbing", rules.candidates().size());
         Map<String, Set<String>> groups = new LinkedHashMap<>();
@@ -138,7 +183,7 @@ public final class Auditor {
             progress.advance(1);
         }
         findings.sort(FindingRules.ORDER);
-        List<Scrub> scrub = scrubKinds(findings, scrubTest, explained, corpus);
+        List<Scrub> scrub = scrubKinds(findings, scrubTest, explained, scrubCorpus);
         progress.done();
 
         List<SubmodularPick.Row> rows = new ArrayList<>();
@@ -149,11 +194,11 @@ public final class Auditor {
         }
         SubmodularPick.Picks picks = SubmodularPick.pick(rows, settings.picks());
 
-        long retries = journal.retries() + (classifier.retries() - retriesSeen);
-        Summary summary = new Summary(scoring.documents, explanations.size(), labels,
-                scoring.labelled == 0 ? null : (double) scoring.correct / scoring.labelled, scoring.skipped, retries,
-                model, corpusName, seed, settings, gold ? "gold" : "predicted", prior, scoring.predictedCounts(),
-                rules.threshold(), rules.tested(), picks.coverage(), (System.nanoTime() - started) / 1_000_000);
+        Summary summary = new Summary(scoring.documents(), explanations.size(), labels,
+                scoring.labelled() == 0 ? null : (double) scoring.correct() / scoring.labelled(), scoring.skipped(),
+                retries.getAsLong(), model, corpusName, seed, settings, gold ? "gold" : "predicted", prior,
+                scoring.predictedCounts(), rules.threshold(), rules.tested(), picks.coverage(),
+                (System.nanoTime() - started) / 1_000_000);
         return new Outcome(new AuditResult(summary, findings, scrub, picks.ids()), explanations);
     }
 
@@ -304,7 +349,7 @@ public final class Auditor {
 
     private CorpusTerms countTerms(Supplier<CorpusReader> corpus, Set<String> selected, List<String> labels, Scoring s,
             boolean gold) {
-        CorpusTerms terms = new CorpusTerms(selected, labels, analyzer, s.repeats);
+        CorpusTerms terms = CorpusTerms.of(selected, labels, analyzer, s.repeats);
         progress.phase("counting", s.documents);
         int position = 0;
         try (CorpusReader reader = corpus.get()) {

@@ -1,5 +1,6 @@
 package org.telltale.audit;
 
+import java.io.Serializable;
 import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -17,12 +18,16 @@ import org.telltale.text.UnitKind;
  * containing each term per label, and where the term's occurrences sit (the {@link Places} of
  * each document). Memory grows with the tested terms, never with the corpus.
  *
- * <p>Not thread-safe.
+ * <p>Counts made over disjoint parts of a corpus {@link #merge} into the counts of the whole, and
+ * travel between machines (the analyzer and the line counts stay behind: a received count only
+ * merges and answers). Not thread-safe.
  */
-public final class CorpusTerms {
+public final class CorpusTerms implements Serializable {
+    private static final long serialVersionUID = 1L;
+
     private final List<String> labels;
-    private final Analyzer analyzer;
-    private final LineRepeats repeats;
+    private final transient Analyzer analyzer;
+    private final transient LineRepeats repeats;
     private final Map<String, long[]> df = new HashMap<>();
     private final Map<String, long[]> places = new HashMap<>();
     private final long[] labelTotals;
@@ -45,8 +50,32 @@ public final class CorpusTerms {
         }
     }
 
+    /** An empty count of {@code terms} under {@code labels}, for one stream or for one part of a corpus. */
+    public static CorpusTerms of(Set<String> terms, List<String> labels, Analyzer analyzer, LineRepeats repeats) {
+        return new CorpusTerms(terms, labels, analyzer, repeats);
+    }
+
+    /** Adds the counts of {@code other}, made over other documents for the same terms and labels. */
+    public void merge(CorpusTerms other) {
+        if (!other.labels.equals(labels) || !other.df.keySet().equals(df.keySet())) {
+            throw new IllegalArgumentException("term counts for other terms or labels do not merge");
+        }
+        documents += other.documents;
+        for (int i = 0; i < labelTotals.length; i++) {
+            labelTotals[i] += other.labelTotals[i];
+        }
+        other.df.forEach((term, counts) -> add(df.get(term), counts));
+        other.places.forEach((term, counts) -> add(places.get(term), counts));
+    }
+
+    private static void add(long[] into, long[] counts) {
+        for (int i = 0; i < into.length; i++) {
+            into[i] += counts[i];
+        }
+    }
+
     /** Counts one document under {@code basisLabel} (its gold label, or the model's prediction). */
-    void add(String text, String basisLabel) {
+    public void add(String text, String basisLabel) {
         int l = labels.indexOf(basisLabel);
         if (l < 0) {
             return; // a gold label the model does not know: no prior to test it against

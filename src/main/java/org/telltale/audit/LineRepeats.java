@@ -2,7 +2,7 @@ package org.telltale.audit;
 
 import java.nio.charset.StandardCharsets;
 import java.util.HashMap;
-import java.util.HashSet;
+import java.util.LinkedHashSet;
 import java.util.Iterator;
 import java.util.Map;
 import java.util.Set;
@@ -17,7 +17,7 @@ import org.telltale.text.Span;
  *
  * <p>Not thread-safe.
  */
-final class LineRepeats {
+public final class LineRepeats {
     /** Lines shorter than this (trimmed) are never boilerplate: "Thanks," or "Hi Sam," is not a footer. */
     static final int MIN_LENGTH = 12;
 
@@ -33,15 +33,35 @@ final class LineRepeats {
         this.capacity = capacity;
     }
 
+    /**
+     * Exact counts from a distributed count: {@code counts} maps the {@link #lineKeys} of a corpus's
+     * documents to the number of documents that have them, over {@code documents} documents. Only
+     * the counts that reach {@link #minRepeats} matter; others may be left out.
+     */
+    public static LineRepeats ofCounts(Map<Long, Integer> counts, long documents) {
+        LineRepeats repeats = new LineRepeats(Math.max(16, counts.size()));
+        counts.forEach((key, n) -> repeats.counts.put(key, new int[] {n}));
+        repeats.documents = documents;
+        return repeats;
+    }
+
+    /** The per-document step: the keys of the distinct long lines of {@code text}, each once. */
+    public static Set<Long> lineKeys(String text) {
+        Set<Long> seen = new LinkedHashSet<>();
+        for (Span line : TextLines.of(text)) {
+            String trimmed = text.substring(line.start(), line.end()).strip();
+            if (trimmed.length() >= MIN_LENGTH) {
+                seen.add(hash(trimmed));
+            }
+        }
+        return seen;
+    }
+
     /** Counts each distinct long line of {@code text} once. */
     void add(String text) {
         documents++;
-        Set<Long> seen = new HashSet<>();
-        for (Span line : TextLines.of(text)) {
-            String trimmed = text.substring(line.start(), line.end()).strip();
-            if (trimmed.length() >= MIN_LENGTH && seen.add(hash(trimmed))) {
-                counts.computeIfAbsent(hash(trimmed), k -> new int[] {floor})[0]++;
-            }
+        for (long key : lineKeys(text)) {
+            counts.computeIfAbsent(key, k -> new int[] {floor})[0]++;
         }
         if (counts.size() > capacity) {
             prune();
@@ -66,11 +86,15 @@ final class LineRepeats {
      * The number of documents a line must appear in to count as boilerplate: 3, or 1% of the
      * corpus when that is more (common practice for "repeated across many documents").
      */
-    int minRepeats() {
+    public static int minRepeats(long documents) {
         return (int) Math.max(3, Math.ceil(documents * 0.01));
     }
 
-    boolean isBoilerplate(String line) {
+    int minRepeats() {
+        return minRepeats(documents);
+    }
+
+    public boolean isBoilerplate(String line) {
         return count(line) >= minRepeats();
     }
 

@@ -1,5 +1,6 @@
 package org.telltale.audit;
 
+import java.io.Serializable;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -16,14 +17,18 @@ import java.util.TreeMap;
  * At the end every non-empty stratum gets at least one place (when N allows) and the rest are
  * shared in proportion to stratum size, largest remainder first (Hamilton's method).
  *
- * <p>Not thread-safe.
+ * <p>Samples of disjoint parts of a corpus, each drawn with the same size and seed, {@link #merge}
+ * into the sample of the whole: a stratum's N lowest priorities are among the N lowest of each
+ * part. Serializable, so that a distributed front can draw one per partition. Not thread-safe.
  */
-public final class StratifiedSample {
-    private record Candidate(String id, long priority) {
+public final class StratifiedSample implements Serializable {
+    private static final long serialVersionUID = 1L;
+
+    private record Candidate(String id, long priority) implements Serializable {
     }
 
-    private static final Comparator<Candidate> BY_PRIORITY =
-            Comparator.comparingLong(Candidate::priority).thenComparing(Candidate::id);
+    private static final Comparator<Candidate> BY_PRIORITY = (Comparator<Candidate> & Serializable) (a, b) ->
+            a.priority != b.priority ? Long.compare(a.priority, b.priority) : a.id.compareTo(b.id);
 
     private final int size;
     private final long seed;
@@ -43,8 +48,21 @@ public final class StratifiedSample {
     public void offer(String id, String predicted, String gold) {
         String stratum = predicted + (gold == null ? "" : gold.equals(predicted) ? " correct" : " incorrect");
         counts.merge(stratum, 1L, Long::sum);
+        keep(stratum, new Candidate(id, priority(seed, id)));
+    }
+
+    /** Adds the documents offered to {@code other}, a sample of the same size and seed over other documents. */
+    public void merge(StratifiedSample other) {
+        if (other.size != size || other.seed != seed) {
+            throw new IllegalArgumentException("samples of size " + size + ", seed " + seed + " and of size "
+                    + other.size + ", seed " + other.seed + " do not merge");
+        }
+        other.counts.forEach((stratum, n) -> counts.merge(stratum, n, Long::sum));
+        other.strata.forEach((stratum, heap) -> heap.forEach(c -> keep(stratum, c)));
+    }
+
+    private void keep(String stratum, Candidate c) {
         PriorityQueue<Candidate> heap = strata.computeIfAbsent(stratum, k -> new PriorityQueue<>(BY_PRIORITY.reversed()));
-        Candidate c = new Candidate(id, priority(seed, id));
         if (heap.size() < size) {
             heap.add(c);
         } else if (BY_PRIORITY.compare(c, heap.peek()) < 0) {

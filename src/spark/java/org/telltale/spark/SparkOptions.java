@@ -15,12 +15,18 @@ import org.telltale.UsageException;
  */
 final class SparkOptions {
     private final Map<String, String> values = new HashMap<>();
+    private final Map<String, List<String>> repeated = new HashMap<>();
     private final Set<String> flags = new HashSet<>();
 
     private SparkOptions() {
     }
 
     static SparkOptions parse(String[] args, List<String> valueOptions, List<String> flagOptions) {
+        return parse(args, valueOptions, List.of(), flagOptions);
+    }
+
+    /** As above, with options that may be given more than once ({@code --header A=B --header C=D}). */
+    static SparkOptions parse(String[] args, List<String> valueOptions, List<String> repeatable, List<String> flagOptions) {
         SparkOptions options = new SparkOptions();
         for (int i = 0; i < args.length; i++) {
             String arg = args[i];
@@ -31,7 +37,16 @@ final class SparkOptions {
                 name = arg.substring(0, eq);
                 inline = arg.substring(eq + 1);
             }
-            if (valueOptions.contains(name)) {
+            if (repeatable.contains(name)) {
+                String value = inline;
+                if (value == null) {
+                    if (i + 1 >= args.length) {
+                        throw new UsageException("missing value for " + name);
+                    }
+                    value = args[++i];
+                }
+                options.repeated.computeIfAbsent(name, k -> new java.util.ArrayList<>()).add(value);
+            } else if (valueOptions.contains(name)) {
                 String value = inline;
                 if (value == null) {
                     if (i + 1 >= args.length) {
@@ -61,6 +76,10 @@ final class SparkOptions {
 
     String get(String name, String fallback) {
         return values.getOrDefault(name, fallback);
+    }
+
+    List<String> all(String name) {
+        return repeated.getOrDefault(name, List.of());
     }
 
     boolean has(String name) {

@@ -58,4 +58,38 @@ class StratifiedSampleTest {
         rows.forEach(r -> otherSeed.offer(r[0], r[1], r[2]));
         assertNotEquals(forward.ids(), otherSeed.ids());
     }
+
+    @Test
+    void samplesOfPartsMergeIntoTheSampleOfTheWholeAlsoAfterSerialization() throws Exception {
+        // Bottom-k samples are mergeable (Cohen and Kaplan, "Summarizing data using bottom-k
+        // sketches", PODC 2007): the k lowest of a union are among the k lowest of each part.
+        List<String[]> rows = new ArrayList<>();
+        for (int i = 0; i < 1000; i++) {
+            String predicted = i % 3 == 0 ? "outage" : i % 3 == 1 ? "billing" : "other";
+            rows.add(new String[] {"doc-" + i, predicted, i % 7 == 0 ? "billing" : predicted});
+        }
+        StratifiedSample whole = new StratifiedSample(30, 5);
+        rows.forEach(r -> whole.offer(r[0], r[1], r[2]));
+        StratifiedSample merged = new StratifiedSample(30, 5);
+        Random random = new Random(9);
+        List<StratifiedSample> parts = new ArrayList<>();
+        for (int p = 0; p < 4; p++) {
+            parts.add(new StratifiedSample(30, 5));
+        }
+        rows.forEach(r -> parts.get(random.nextInt(4)).offer(r[0], r[1], r[2]));
+        for (StratifiedSample part : parts) {
+            java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+            try (java.io.ObjectOutputStream out = new java.io.ObjectOutputStream(bytes)) {
+                out.writeObject(part);
+            }
+            try (java.io.ObjectInputStream in = new java.io.ObjectInputStream(new java.io.ByteArrayInputStream(bytes.toByteArray()))) {
+                merged.merge((StratifiedSample) in.readObject());
+            }
+        }
+        assertEquals(whole.strata(), merged.strata());
+        assertEquals(whole.ids(), merged.ids());
+        assertEquals(30, merged.ids().size());
+        org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                () -> merged.merge(new StratifiedSample(30, 6)));
+    }
 }

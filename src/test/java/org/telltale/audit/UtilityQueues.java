@@ -27,8 +27,8 @@ import org.telltale.text.Document;
  * The clean variant has the same layout, but every queue shares the same header values, case
  * code style and signature.
  */
-final class UtilityQueues {
-    static final List<String> QUEUES = List.of("billing", "meter", "outage");
+public final class UtilityQueues {
+    public static final List<String> QUEUES = List.of("billing", "meter", "outage");
     static final String TABLET_SIGNATURE = "Sent via the Fernhill field tablet app";
     static final String DESK_SIGNATURE = "Kestrel Valley Utilities customer desk";
 
@@ -47,7 +47,7 @@ final class UtilityQueues {
     }
 
     /** {@code perQueue} messages per queue; {@code leaky} plants the artefacts in 90% of a queue's mail, 3% elsewhere. */
-    static List<Document> generate(long seed, int perQueue, boolean leaky) {
+    public static List<Document> generate(long seed, int perQueue, boolean leaky) {
         Random random = new Random(seed);
         List<Document> docs = new ArrayList<>();
         int n = 0;
@@ -101,7 +101,7 @@ final class UtilityQueues {
     }
 
     /** Writes {@code docs} as JSON Lines with id, text and label. */
-    static Path write(List<Document> docs, Path file) throws IOException {
+    public static Path write(List<Document> docs, Path file) throws IOException {
         ObjectMapper mapper = new ObjectMapper();
         StringBuilder out = new StringBuilder();
         for (Document d : docs) {

@@ -1,0 +1,78 @@
+package org.telltale.spark;
+
+import java.io.Serializable;
+import java.time.Duration;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.telltale.UsageException;
+import org.telltale.connect.ConnectorSettings;
+import org.telltale.connect.Connectors;
+import org.telltale.connect.Durations;
+import org.telltale.connect.Protocol;
+import org.telltale.connect.ScoreKind;
+import org.telltale.model.TextClassifier;
+
+/**
+ * The model options of {@code telltale audit} ({@code --model}, {@code --protocol}, {@code --batch},
+ * {@code --parallel}, {@code --timeout}, {@code --retries}, {@code --header}, {@code --scores},
+ * {@code --labels}) as given, with the same defaults and checks, in a form Spark ships to its
+ * tasks: each partition opens its own connector from them. A model file is shipped to the
+ * executors with the job ({@code SparkContext.addFile}); {@code --header} values are read from
+ * the environment where the connector opens, so executors need the variables too.
+ */
+record ModelParams(String spec, String protocol, int batch, int parallel, String timeout, int retries,
+                   List<String> headers, String scores, String labels) implements Serializable {
+
+    static final List<String> VALUE_OPTIONS = List.of("--model", "--protocol", "--batch", "--parallel", "--timeout",
+            "--retries", "--scores", "--labels");
+    static final String HEADER = "--header";
+
+    static ModelParams of(SparkOptions o) {
+        ModelParams p = new ModelParams(o.required("--model"), o.get("--protocol", "native"),
+                o.integer("--batch", ConnectorSettings.DEFAULT_BATCH), o.integer("--parallel", 0), o.get("--timeout", "30s"),
+                o.integer("--retries", ConnectorSettings.DEFAULT_RETRIES), List.copyOf(o.all(HEADER)),
+                o.get("--scores", "probabilities"), o.get("--labels", null));
+        p.settings(p.spec);
+        return p;
+    }
+
+    /** The connector settings, for {@code where} the model is (the spec, or the shipped copy of a model file). */
+    ConnectorSettings settings(String where) {
+        if (batch < 1) {
+            throw new UsageException("--batch must be at least 1: " + batch);
+        }
+        if (parallel < 0) {
+            throw new UsageException("--parallel must be at least 1: " + parallel);
+        }
+        if (retries < 0) {
+            throw new UsageException("--retries must be 0 or more: " + retries);
+        }
+        Duration wait = Durations.parse(timeout);
+        if (wait.isZero() || wait.isNegative()) {
+            throw new UsageException("--timeout must be positive: " + Durations.format(wait));
+        }
+        Map<String, String> named = new LinkedHashMap<>();
+        for (String header : headers) {
+            int eq = header.indexOf('=');
+            if (eq <= 0 || eq == header.length() - 1) {
+                throw new UsageException("--header must be NAME=ENVVAR: '" + header + "'");
+            }
+            named.put(header.substring(0, eq), header.substring(eq + 1));
+        }
+        List<String> labelList = labels == null ? List.of() : Arrays.asList(labels.split(","));
+        return ConnectorSettings.of(where).withProtocol(Protocol.byName(protocol)).withBatch(batch).withParallel(parallel)
+                .withTimeout(wait).withRetries(retries).withHeaders(named).withScores(ScoreKind.byName(scores))
+                .withLabels(labelList);
+    }
+
+    boolean isFile() {
+        return ConnectorSettings.of(spec).kind() == ConnectorSettings.Kind.FILE;
+    }
+
+    /** Opens the connector at {@code where}; the caller closes it. */
+    TextClassifier open(String where) {
+        return Connectors.open(settings(where));
+    }
+}

@@ -1,0 +1,107 @@
+package org.telltale.spark;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.telltale.JarRun;
+import org.telltale.JarRun.Run;
+import org.telltale.audit.UtilityQueues;
+
+/**
+ * SparkAudit in local mode against {@code telltale audit}: the same audit.json but for the
+ * timing and the model's description, the same explanations.jsonl but for timings, and the same exit code, on the
+ * demo corpus and on a generated mailbox with planted header, address, identifier and boilerplate
+ * artefacts — the second while the first attempt of a partition fails in every stage.
+ */
+class SparkAuditIT {
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void demoCorpusGivesTheSameAuditAsOneMachine() throws Exception {
+        Path corpus = Path.of("corpora-demo/support-leaky.jsonl").toAbsolutePath();
+        Path model = dir.resolve("leaky-model.json");
+        Run trained = JarRun.telltale(dir, "train", "--corpus", corpus.toString(), "--out", model.toString());
+        assertEquals(0, trained.code(), trained.err());
+        JsonNode single = compare(corpus, model, "", "local[2]", "--sample", "40", "--probes", "300");
+        assertTrue(single.path("findings").size() > 0, "the leaky demo corpus has findings: " + single);
+    }
+
+    @Test
+    void plantedArtefactsGiveTheSameAuditWhenTheFirstAttemptOfAPartitionFailsInEveryStage() throws Exception {
+        Path model = dir.resolve("mailbox-model.json");
+        Path training = UtilityQueues.write(UtilityQueues.generate(1, 150, true), dir.resolve("training.jsonl"));
+        Run trained = JarRun.telltale(dir, "train", "--corpus", training.toString(), "--out", model.toString());
+        assertEquals(0, trained.code(), trained.err());
+        Path corpus = UtilityQueues.write(UtilityQueues.generate(2, 120, true), dir.resolve("mailbox.jsonl"));
+        Path failures = dir.resolve("failures");
+        JsonNode single = compare(corpus, model, "-Dspark.plugins=" + FirstAttemptFailure.class.getName()
+                + " -Dtelltale.test.failures=" + failures + " -Dspark.default.parallelism=3", "local[2,4]",
+                "--sample", "45", "--probes", "300", "--words", "8");
+        try (Stream<Path> failed = Files.list(failures)) {
+            assertTrue(failed.count() >= 3, "planned failures happened in several stages");
+        }
+        String found = single.path("findings").toString();
+        // The planted artefacts of UtilityQueues are found (the single-machine tests check their kinds).
+        assertTrue(found.contains("ivr7") && found.contains("ledgerline.example"), found);
+        assertEquals(360, single.path("summary").path("documents").asLong());
+    }
+
+    /** Runs both audits with the same options and checks they agree; returns the single-machine audit.json. */
+    private JsonNode compare(Path corpus, Path model, String javaOpts, String master, String... options) throws Exception {
+        Path oneOut = dir.resolve("single-" + corpus.getFileName());
+        Path sparkOut = dir.resolve("spark-" + corpus.getFileName());
+        Run one = JarRun.telltale(dir, concat(new String[] {"audit", "--corpus", corpus.toString(), "--model",
+                model.toString(), "--out", oneOut.toString(), "--quiet"}, options));
+        assertTrue(one.code() == 0 || one.code() == 3, one.err());
+        Run distributed = SparkRun.front(dir, javaOpts, "SparkAudit", concat(new String[] {"--master", master,
+                "--corpus", corpus.toString(), "--model", model.toString(), "--out", sparkOut.toString(), "--quiet"}, options));
+        assertEquals(one.code(), distributed.code(), distributed.err());
+        ObjectNode expected = (ObjectNode) JSON.readTree(oneOut.resolve("audit.json").toFile());
+        ObjectNode actual = (ObjectNode) JSON.readTree(sparkOut.resolve("audit.json").toFile());
+        for (ObjectNode audit : new ObjectNode[] {expected, actual}) {
+            ObjectNode summary = (ObjectNode) audit.path("summary");
+            assertTrue(summary.has("elapsed_ms") && summary.has("model"), summary.toString());
+            summary.remove("elapsed_ms");
+            summary.remove("model");
+        }
+        assertEquals(expected, actual);
+        assertNotEquals(0, expected.path("summary").path("explained").asInt());
+        assertEquals(withoutTimings(oneOut.resolve("explanations.jsonl")), withoutTimings(sparkOut.resolve("explanations.jsonl")));
+        assertTrue(Files.readString(sparkOut.resolve("report.html")).contains("<html"), "report.html");
+        return expected;
+    }
+
+    /** The explanation lines without their "timing" objects (milliseconds spent, which differ between runs). */
+    private static List<JsonNode> withoutTimings(Path file) throws Exception {
+        List<JsonNode> lines = new ArrayList<>();
+        for (String line : Files.readAllLines(file)) {
+            ObjectNode node = (ObjectNode) JSON.readTree(line);
+            assertTrue(node.has("timing"), line);
+            node.remove("timing");
+            lines.add(node);
+        }
+        assertTrue(lines.size() > 0);
+        return lines;
+    }
+
+    private static String[] concat(String[] a, String[] b) {
+        String[] out = new String[a.length + b.length];
+        System.arraycopy(a, 0, out, 0, a.length);
+        System.arraycopy(b, 0, out, a.length, b.length);
+        return out;
+    }
+}
