@@ -36,7 +36,9 @@ class SparkAuditIT {
         Path model = dir.resolve("leaky-model.json");
         Run trained = JarRun.telltale(dir, "train", "--corpus", corpus.toString(), "--out", model.toString());
         assertEquals(0, trained.code(), trained.err());
-        JsonNode single = compare(corpus, model, "", "local[2]", "--sample", "40", "--probes", "300");
+        // Splits of 256 kB: the demo corpus is read in several partitions.
+        JsonNode single = compare(corpus, model, "-Dspark.sql.files.maxPartitionBytes=262144", "local[2]",
+                "--sample", "40", "--probes", "300");
         assertTrue(single.path("findings").size() > 0, "the leaky demo corpus has findings: " + single);
     }
 
@@ -49,7 +51,7 @@ class SparkAuditIT {
         Path corpus = UtilityQueues.write(UtilityQueues.generate(2, 120, true), dir.resolve("mailbox.jsonl"));
         Path failures = dir.resolve("failures");
         JsonNode single = compare(corpus, model, "-Dspark.plugins=" + FirstAttemptFailure.class.getName()
-                + " -Dtelltale.test.failures=" + failures + " -Dspark.default.parallelism=3", "local[2,4]",
+                + " -Dtelltale.test.failures=" + failures + " -Dspark.sql.files.maxPartitionBytes=16384", "local[2,4]",
                 "--sample", "45", "--probes", "300", "--words", "8");
         try (Stream<Path> failed = Files.list(failures)) {
             assertTrue(failed.count() >= 3, "planned failures happened in several stages");

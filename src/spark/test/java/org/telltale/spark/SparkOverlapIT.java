@@ -30,6 +30,8 @@ import org.telltale.overlap.SupportTickets;
  */
 class SparkOverlapIT {
     private static final ObjectMapper JSON = new ObjectMapper();
+    /** Splits of 32 kB, so that every corpus here is read in several partitions (CSV with multiLine stays one). */
+    private static final String SMALL_SPLITS = "-Dspark.sql.files.maxPartitionBytes=32768";
 
     @TempDir
     static Path dir;
@@ -82,7 +84,7 @@ class SparkOverlapIT {
         Run one = JarRun.telltale(work, "overlap", "--train", demoTrain, "--test", demoTest, "--json", single.toString(), "--quiet");
         assertEquals(0, one.code(), one.err());
         Path spark = work.resolve("spark.json");
-        Run distributed = SparkRun.front(work, "", "SparkOverlap", "--master", "local[2]", "--train", demoTrain,
+        Run distributed = SparkRun.front(work, SMALL_SPLITS, "SparkOverlap", "--master", "local[2]", "--train", demoTrain,
                 "--test", demoTest, "--json", spark.toString(), "--quiet");
         assertEquals(0, distributed.code(), distributed.err());
         assertTrue(JSON.readTree(single.toFile()).path("summary").path("train_test_pairs").asLong() > 1000,
@@ -100,7 +102,7 @@ class SparkOverlapIT {
                 "--texts", "--json", single.toString(), "--quiet");
         assertEquals(0, one.code(), one.err());
         Path spark = work.resolve("spark.json");
-        Run distributed = SparkRun.front(work, "", "SparkOverlap", "--master", "local[2]", "--train", trainCsv.toString(),
+        Run distributed = SparkRun.front(work, SMALL_SPLITS, "SparkOverlap", "--master", "local[2]", "--train", trainCsv.toString(),
                 "--test", test.toString(), "--texts", "--json", spark.toString(), "--quiet");
         assertEquals(0, distributed.code(), distributed.err());
         ObjectNode expected = (ObjectNode) JSON.readTree(single.toFile());
@@ -125,7 +127,7 @@ class SparkOverlapIT {
         Path failures = work.resolve("failures");
         Path spark = work.resolve("spark.json");
         Run distributed = SparkRun.front(work, "-Dspark.plugins=" + FirstAttemptFailure.class.getName()
-                        + " -Dtelltale.test.failures=" + failures,
+                        + " -Dtelltale.test.failures=" + failures + " " + SMALL_SPLITS,
                 "SparkOverlap", "--master", "local[2,4]", "--train", parquet.toString(), "--test", test.toString(),
                 "--json", spark.toString(), "--quiet");
         assertEquals(0, distributed.code(), distributed.err());
