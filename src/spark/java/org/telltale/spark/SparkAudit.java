@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.stream.Collectors;
 import org.apache.lucene.analysis.Analyzer;
 import org.apache.spark.api.java.JavaRDD;
@@ -23,6 +24,8 @@ import org.telltale.model.TextClassifier;
 import org.telltale.report.html.HtmlReports;
 import org.telltale.report.json.AuditJson;
 import org.telltale.report.json.ExplanationsJson;
+import org.telltale.report.sarif.AuditSarif;
+import org.telltale.report.sarif.SarifWriter;
 import org.telltale.text.Analyzers;
 
 /**
@@ -41,7 +44,7 @@ public final class SparkAudit {
     static {
         List<String> values = new ArrayList<>(List.of("--corpus", "--format", "--id-field", "--text-field",
                 "--label-field", "--analyzer", "--sample", "--probes", "--words", "--out", "--policy", "--fail-on",
-                "--picks", "--seed", "--master"));
+                "--picks", "--seed", "--sarif", "--master"));
         values.addAll(ModelParams.VALUE_OPTIONS);
         VALUES = List.copyOf(values);
     }
@@ -85,6 +88,10 @@ public final class SparkAudit {
                 o.get("--label-field", "label"), o.has("--skip-bad"));
         SparkFormat format = SparkFormat.of(o.get("--format", null), corpusPath);
         Policy rules = policyFile == null ? Policy.empty() : Policy.read(policyFile);
+        Path sarif = o.has("--sarif") ? Path.of(o.required("--sarif")) : null;
+        if (sarif != null) {
+            SarifWriter.refuseToReplace(sarif, o.has("--force"));
+        }
         OutputFolder folder = OutputFolder.open(Path.of(o.get("--out", "telltale-audit")), o.has("--force"), false);
         boolean quiet = o.has("--quiet");
 
@@ -122,6 +129,12 @@ public final class SparkAudit {
         files.add(folder.write(OutputFolder.AUDIT, AuditJson.toJson(outcome.result()) + "\n").toString());
         files.add(folder.write(OutputFolder.REPORT, HtmlReports.audit(outcome.result(), outcome.explanations())).toString());
         AuditResult result = outcome.result();
+        if (sarif != null) {
+            // The example documents' record lines are not looked up on Spark: locations name the corpus alone.
+            String uri = corpusPath.contains("://") ? corpusPath : SarifWriter.uri(Path.of(corpusPath));
+            SarifWriter.write(AuditSarif.of(result, version(), uri, Map.of()), sarif, true);
+            files.add(sarif.toString());
+        }
         AuditResult.Summary s = result.summary();
         out.printf(Locale.ROOT, "audited %d documents, explained %d; findings: %d, %d open at or above %s%n",
                 s.documents(), s.explained(), result.findings().size(),
@@ -131,6 +144,19 @@ public final class SparkAudit {
         }
         out.flush();
         return gate != null && !result.open(gate).isEmpty() ? ExitCodes.GATE : ExitCodes.OK;
+    }
+
+    /** The version Maven wrote into version.properties, as telltale --version reports it. */
+    private static String version() {
+        try (java.io.InputStream in = SparkAudit.class.getResourceAsStream("/org/telltale/version.properties")) {
+            java.util.Properties p = new java.util.Properties();
+            if (in != null) {
+                p.load(new java.io.InputStreamReader(in, java.nio.charset.StandardCharsets.UTF_8));
+            }
+            return p.getProperty("version", "unknown");
+        } catch (java.io.IOException e) {
+            return "unknown";
+        }
     }
 
     private static Severity severity(String level) {

@@ -37,9 +37,17 @@ class SparkAuditIT {
         Run trained = JarRun.telltale(dir, "train", "--corpus", corpus.toString(), "--out", model.toString());
         assertEquals(0, trained.code(), trained.err());
         // Splits of 256 kB: the demo corpus is read in several partitions.
+        Path sarif = dir.resolve("spark.sarif");
         JsonNode single = compare(corpus, model, "-Dspark.sql.files.maxPartitionBytes=262144", "local[2]",
                 "--sample", "40", "--probes", "300");
         assertTrue(single.path("findings").size() > 0, "the leaky demo corpus has findings: " + single);
+        Run withSarif = SparkRun.front(dir, "", "SparkAudit", "--master", "local[1]", "--corpus", corpus.toString(),
+                "--model", model.toString(), "--out", dir.resolve("spark-sarif").toString(), "--quiet", "--sample", "20",
+                "--probes", "200", "--fail-on", "never", "--sarif", sarif.toString());
+        assertEquals(0, withSarif.code(), withSarif.err());
+        JsonNode log = JSON.readTree(sarif.toFile());
+        assertEquals("2.1.0", log.path("version").asText(), log.toString());
+        assertTrue(log.path("runs").path(0).path("results").size() > 0, log.toString());
     }
 
     @Test
