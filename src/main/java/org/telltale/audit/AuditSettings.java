@@ -1,6 +1,8 @@
 package org.telltale.audit;
 
 import java.util.Objects;
+import org.telltale.explain.ExplainSettings;
+import org.telltale.explain.Target;
 
 /**
  * The knobs of one audit that decide its result, recorded in {@code audit.json} and checked on
@@ -27,7 +29,7 @@ public record AuditSettings(
         double alpha,
         int batch,
         String analyzer,
-        String policy) {
+        String policy) implements java.io.Serializable {
 
     /** The family-wise level a finding's association must pass, before the Bonferroni division. */
     public static final double DEFAULT_ALPHA = 0.05;
@@ -42,5 +44,15 @@ public record AuditSettings(
         if (!(alpha > 0 && alpha < 1)) {
             throw new IllegalArgumentException("alpha must lie in (0, 1): " + alpha);
         }
+    }
+
+    /**
+     * How the audit explains each sampled document, for every front that runs an audit: the
+     * explainer's defaults with these words, probes and analyzer and the run seed, in probability
+     * (the audit's rules are set on that scale).
+     */
+    public ExplainSettings explainSettings(long seed) {
+        return ExplainSettings.defaults().withWords(words).withProbes(probes).withSeed(seed).withAnalyzer(analyzer)
+                .withTarget(Target.PROBABILITY);
     }
 }

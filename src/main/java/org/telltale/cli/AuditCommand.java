@@ -17,7 +17,6 @@ import org.telltale.audit.Policy;
 import org.telltale.audit.RunFingerprint;
 import org.telltale.audit.Severity;
 import org.telltale.explain.ExplainSettings;
-import org.telltale.explain.Target;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
 import org.telltale.connect.ModelIdentity;
@@ -92,8 +91,7 @@ final class AuditCommand implements Callable<Integer> {
             SarifWriter.refuseToReplace(sarif, force || resume);
         }
         OutputFolder folder = OutputFolder.open(out, force, resume);
-        ExplainSettings explain = ExplainSettings.defaults().withWords(words).withProbes(probes).withSeed(seed)
-                .withAnalyzer(analyzer.spec()).withTarget(Target.PROBABILITY); // the audit's rules are set in probability
+        ExplainSettings explain = settings.explainSettings(seed);
         Auditor.Progress progress = AuditProgressBar.forTerminal(quiet);
         Auditor.Outcome outcome;
         String concurrency;

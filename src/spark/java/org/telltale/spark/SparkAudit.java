@@ -106,7 +106,7 @@ public final class SparkAudit {
                 shipped = Path.of(model.spec()).getFileName().toString();
             }
             AuditParams params = new AuditParams(model, shipped, analyzerSpec, settings.sample(), settings.probes(),
-                    settings.words(), seed);
+                    settings.words(), seed, settings);
             JavaRDD<CorpusRow> rows = SparkCorpus.read(spark, corpusPath, format, fields, 0);
             DistributedAudit distributed = new DistributedAudit(context, params);
             progress(err, quiet, "scoring and explaining on Spark with " + classifier.describe());
