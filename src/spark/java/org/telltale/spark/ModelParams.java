@@ -16,22 +16,23 @@ import org.telltale.model.TextClassifier;
 
 /**
  * The model options of {@code telltale audit} ({@code --model}, {@code --protocol}, {@code --batch},
- * {@code --parallel}, {@code --timeout}, {@code --retries}, {@code --header}, {@code --scores},
+ * {@code --parallel}, {@code --parallel-max}, {@code --timeout}, {@code --retries}, {@code --header}, {@code --scores},
  * {@code --labels}) as given, with the same defaults and checks, in a form Spark ships to its
  * tasks: each partition opens its own connector from them. A model file is shipped to the
  * executors with the job ({@code SparkContext.addFile}); {@code --header} values are read from
  * the environment where the connector opens, so executors need the variables too.
  */
-record ModelParams(String spec, String protocol, int batch, int parallel, String timeout, int retries,
-                   List<String> headers, String scores, String labels) implements Serializable {
+record ModelParams(String spec, String protocol, int batch, String parallel, int parallelMax, String timeout,
+                   int retries, List<String> headers, String scores, String labels) implements Serializable {
 
-    static final List<String> VALUE_OPTIONS = List.of("--model", "--protocol", "--batch", "--parallel", "--timeout",
-            "--retries", "--scores", "--labels");
+    static final List<String> VALUE_OPTIONS = List.of("--model", "--protocol", "--batch", "--parallel", "--parallel-max",
+            "--timeout", "--retries", "--scores", "--labels");
     static final String HEADER = "--header";
 
     static ModelParams of(SparkOptions o) {
         ModelParams p = new ModelParams(o.required("--model"), o.get("--protocol", "native"),
-                o.integer("--batch", ConnectorSettings.DEFAULT_BATCH), o.integer("--parallel", 0), o.get("--timeout", "30s"),
+                o.integer("--batch", ConnectorSettings.DEFAULT_BATCH), o.get("--parallel", "auto"),
+                o.integer("--parallel-max", ConnectorSettings.DEFAULT_PARALLEL_MAX), o.get("--timeout", "30s"),
                 o.integer("--retries", ConnectorSettings.DEFAULT_RETRIES), List.copyOf(o.all(HEADER)),
                 o.get("--scores", "probabilities"), o.get("--labels", null));
         p.settings(p.spec);
@@ -43,9 +44,7 @@ record ModelParams(String spec, String protocol, int batch, int parallel, String
         if (batch < 1) {
             throw new UsageException("--batch must be at least 1: " + batch);
         }
-        if (parallel < 0) {
-            throw new UsageException("--parallel must be at least 1: " + parallel);
-        }
+        int inFlight = parallelValue();
         if (retries < 0) {
             throw new UsageException("--retries must be 0 or more: " + retries);
         }
@@ -62,9 +61,31 @@ record ModelParams(String spec, String protocol, int batch, int parallel, String
             named.put(header.substring(0, eq), header.substring(eq + 1));
         }
         List<String> labelList = labels == null ? List.of() : Arrays.asList(labels.split(","));
-        return ConnectorSettings.of(where).withProtocol(Protocol.byName(protocol)).withBatch(batch).withParallel(parallel)
-                .withTimeout(wait).withRetries(retries).withHeaders(named).withScores(ScoreKind.byName(scores))
-                .withLabels(labelList);
+        try {
+            return ConnectorSettings.of(where).withProtocol(Protocol.byName(protocol)).withBatch(batch)
+                    .withParallel(inFlight).withParallelMax(parallelMax).withTimeout(wait).withRetries(retries)
+                    .withHeaders(named).withScores(ScoreKind.byName(scores)).withLabels(labelList);
+        } catch (IllegalArgumentException e) {
+            throw new UsageException("--" + e.getMessage());
+        }
+    }
+
+    /** {@code --parallel}: a count of at least 1, or {@code auto} (the default), as {@code telltale audit} takes it. */
+    private int parallelValue() {
+        String v = parallel.strip();
+        if (v.equalsIgnoreCase("auto")) {
+            return ConnectorSettings.AUTO;
+        }
+        int n;
+        try {
+            n = Integer.parseInt(v);
+        } catch (NumberFormatException e) {
+            throw new UsageException("--parallel must be a number or auto: " + parallel);
+        }
+        if (n < 1) {
+            throw new UsageException("--parallel must be at least 1: " + n);
+        }
+        return n;
     }
 
     boolean isFile() {
