@@ -9,8 +9,8 @@ import org.telltale.ExitCodes;
 import org.telltale.UsageException;
 import org.telltale.model.TextClassifier;
 import org.telltale.overlap.AccuracyInflation;
-import org.telltale.overlap.Banding;
 import org.telltale.overlap.CorpusFile;
+import org.telltale.overlap.OverlapOptions;
 import org.telltale.overlap.OverlapFinder;
 import org.telltale.overlap.OverlapResult;
 import org.telltale.overlap.OverlapSettings;
@@ -133,33 +133,11 @@ final class OverlapCommand implements Callable<Integer> {
     }
 
     private OverlapSettings settings() {
-        if (!(threshold > 0 && threshold <= 1)) {
-            throw new UsageException("--threshold must be in (0, 1]: " + threshold);
-        }
-        if (shingle < 1) {
-            throw new UsageException("--shingle must be at least 1: " + shingle);
-        }
-        if (signature < 1) {
-            throw new UsageException("--signature must be at least 1: " + signature);
-        }
-        if ((rows == null) != (bands == null)) {
-            throw new UsageException("--rows and --bands go together");
-        }
-        Banding banding = null;
-        if (rows != null) {
-            if (rows < 1 || bands < 1) {
-                throw new UsageException("--rows and --bands must be at least 1: " + rows + ", " + bands);
-            }
-            banding = new Banding(rows, bands);
-            if (banding.hashes() > signature) {
-                throw new UsageException("--rows × --bands = " + banding.hashes() + " exceeds --signature " + signature);
-            }
-        }
         if (threads < 0) {
             throw new UsageException("--threads must be 0 (one per core) or more: " + threads);
         }
         int workers = threads == 0 ? Runtime.getRuntime().availableProcessors() : threads;
-        return new OverlapSettings(threshold, shingle, signature, banding, seed, workers, texts || html != null);
+        return OverlapOptions.settings(threshold, shingle, signature, rows, bands, seed, workers, texts || html != null);
     }
 
     private CorpusSettings corpusSettings() {

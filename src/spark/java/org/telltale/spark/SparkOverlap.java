@@ -8,7 +8,7 @@ import org.apache.spark.api.java.JavaSparkContext;
 import org.apache.spark.sql.SparkSession;
 import org.telltale.ExitCodes;
 import org.telltale.UsageException;
-import org.telltale.overlap.Banding;
+import org.telltale.overlap.OverlapOptions;
 import org.telltale.overlap.OverlapResult;
 import org.telltale.overlap.OverlapSettings;
 import org.telltale.report.html.HtmlReports;
@@ -92,28 +92,6 @@ public final class SparkOverlap {
         Integer rows = o.integerOrNull("--rows");
         Integer bands = o.integerOrNull("--bands");
         long seed = o.longValue("--seed", 1L);
-        if (!(threshold > 0 && threshold <= 1)) {
-            throw new UsageException("--threshold must be in (0, 1]: " + threshold);
-        }
-        if (shingle < 1) {
-            throw new UsageException("--shingle must be at least 1: " + shingle);
-        }
-        if (signature < 1) {
-            throw new UsageException("--signature must be at least 1: " + signature);
-        }
-        if ((rows == null) != (bands == null)) {
-            throw new UsageException("--rows and --bands go together");
-        }
-        Banding banding = null;
-        if (rows != null) {
-            if (rows < 1 || bands < 1) {
-                throw new UsageException("--rows and --bands must be at least 1: " + rows + ", " + bands);
-            }
-            banding = new Banding(rows, bands);
-            if (banding.hashes() > signature) {
-                throw new UsageException("--rows × --bands = " + banding.hashes() + " exceeds --signature " + signature);
-            }
-        }
-        return new OverlapSettings(threshold, shingle, signature, banding, seed, 1, keepTexts);
+        return OverlapOptions.settings(threshold, shingle, signature, rows, bands, seed, 1, keepTexts);
     }
 }
