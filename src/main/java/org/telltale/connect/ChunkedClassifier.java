@@ -4,6 +4,8 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CancellationException;
+import java.util.concurrent.CompletionService;
+import java.util.concurrent.ExecutorCompletionService;
 import java.util.concurrent.ExecutionException;
 import java.util.Locale;
 import java.util.concurrent.Future;
@@ -78,12 +80,13 @@ final class ChunkedClassifier implements TextClassifier {
         double[][] rows = new double[n][];
         double[][] logits = validator.kind() == ScoreKind.LOGITS ? new double[n][] : null; // kept for the explainer
         List<Future<?>> pending = new ArrayList<>((n + batch - 1) / batch);
+        CompletionService<Object> done = new ExecutorCompletionService<>(pool);
         for (int offset = 0; offset < n; offset += batch) {
             int from = offset;
             int to = Math.min(n, offset + batch);
             var place = new ResponseValidator.BatchPlace(from / batch + 1, from, to - from, ids, redactor);
             List<String> chunk = texts.subList(from, to);
-            pending.add(pool.submit(() -> {
+            pending.add(done.submit(() -> {
                 double[][] partLogits = logits == null ? null : new double[chunk.size()][];
                 double[][] part = scoreWithRetries(chunk, place, partLogits);
                 System.arraycopy(part, 0, rows, from, part.length);
@@ -93,7 +96,7 @@ final class ChunkedClassifier implements TextClassifier {
                 return null;
             }));
         }
-        awaitAll(pending);
+        awaitAll(pending, done);
         List<String> labels = validator.labels();
         return new ScoreMatrix(labels == null ? List.of() : labels, rows, logits);
     }
@@ -176,26 +179,33 @@ final class ChunkedClassifier implements TextClassifier {
         }
     }
 
-    private void awaitAll(List<Future<?>> pending) {
+    /**
+     * Waits for every batch, in the order they finish: the first batch to fail stops the call with
+     * its own error (the others are cancelled), so the error shown is the one that happened first,
+     * not whichever belongs to the lowest batch number.
+     */
+    private void awaitAll(List<Future<?>> pending, CompletionService<Object> done) {
         for (int i = 0; i < pending.size(); i++) {
             try {
-                pending.get(i).get();
+                done.take().get();
             } catch (ExecutionException e) {
-                for (Future<?> f : pending) {
-                    f.cancel(true);
-                }
+                cancel(pending);
                 Throwable cause = e.getCause();
                 if (cause instanceof TelltaleException te) {
                     throw te;
                 }
                 throw new ClassifierException(redactor.redact("scoring through " + description + " failed: " + cause), cause);
             } catch (InterruptedException e) {
-                for (Future<?> f : pending) {
-                    f.cancel(true);
-                }
+                cancel(pending);
                 Thread.currentThread().interrupt();
                 throw new ClassifierException("scoring was interrupted");
             }
+        }
+    }
+
+    private static void cancel(List<Future<?>> pending) {
+        for (Future<?> f : pending) {
+            f.cancel(true);
         }
     }
 

@@ -22,6 +22,7 @@ final class ModelProcess implements AutoCloseable {
     /** An answer line longer than this is garbage, not a score matrix. */
     static final int MAX_LINE_CHARS = 64 << 20;
     private static final int STDERR_TAIL_CHARS = 2000;
+    private static final int STDERR_WAIT_SECONDS = 5;
     private static final Object EOF = new Object();
 
     private final Process process;
@@ -156,9 +157,11 @@ final class ModelProcess implements AutoCloseable {
     /** The last lines the process wrote to stderr, one line, or "" when it wrote none. */
     String stderrTail() {
         try {
-            // A process that has exited (or was killed): let the reader catch its dying words.
-            if (process.waitFor(1, TimeUnit.SECONDS)) {
-                stderrReader.join(1000);
+            // A process that has exited (or was killed): let the reader catch its dying words. Both
+            // waits end as soon as the event happens; the bounds only matter for a process whose
+            // stderr stays open (a child that inherited it), and are generous for a busy machine.
+            if (process.waitFor(STDERR_WAIT_SECONDS, TimeUnit.SECONDS)) {
+                stderrReader.join(STDERR_WAIT_SECONDS * 1000L);
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();

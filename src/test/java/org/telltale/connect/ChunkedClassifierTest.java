@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
 import org.telltale.model.ClassifierException;
@@ -102,6 +103,36 @@ class ChunkedClassifierTest {
             var e = assertThrows(ClassifierException.class, () -> c.score(List.of("a", "b")));
             assertEquals("batch 1 (documents 0–1): HTTP 503 from test (after 2 retries)", e.getMessage());
             assertEquals(2, c.retries());
+        }
+    }
+
+    @Test
+    void theErrorShownIsTheFirstThatHappenedNotTheLowestBatchs() {
+        // Batch 1 fails only after batch 2 has failed: the call must report batch 2's error.
+        CountDownLatch secondFailed = new CountDownLatch(1);
+        BatchScorer laterFirst = new BatchScorer() {
+            @Override
+            public RawScores score(List<String> texts) {
+                if (texts.get(0).equals("late")) {
+                    try {
+                        secondFailed.await();
+                    } catch (InterruptedException e) {
+                        Thread.currentThread().interrupt();
+                    }
+                    throw new ClassifierException("late failure");
+                }
+                secondFailed.countDown();
+                throw new ClassifierException("early failure");
+            }
+
+            @Override
+            public String describe() {
+                return "ordered";
+            }
+        };
+        try (var c = new ChunkedClassifier(laterFirst, fast(0).withBatch(1).withParallel(2), Redactor.none(), "ordered")) {
+            var e = assertThrows(ClassifierException.class, () -> c.score(List.of("late", "early")));
+            assertEquals("batch 2 (documents 1–1): early failure", e.getMessage());
         }
     }
 
