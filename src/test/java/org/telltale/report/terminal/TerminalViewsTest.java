@@ -39,8 +39,8 @@ class TerminalViewsTest {
     @Test
     void colourViewsUseAnsiOnlyWhenAsked() {
         String marked = MarkedLine.render(sample(), true);
-        assertTrue(marked.contains("\u001b[1;38;5;33mRefund+\u001b[0m"), marked);
-        assertTrue(marked.contains("\u001b[1;38;5;208mlate-\u001b[0m"), marked);
+        assertTrue(marked.contains("\u001b[1;38;5;29mRefund+\u001b[0m"), marked);
+        assertTrue(marked.contains("\u001b[1;38;5;97mlate-\u001b[0m"), marked);
         assertFalse(marked.contains("\u001b]0;"), "the document's own escape stays escaped");
     }
 
