@@ -15,13 +15,122 @@ import org.telltale.text.Span;
  *
  * <p>Immutable; collections are copied on construction.
  */
-public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> scrub, List<String> picks) {
+public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> scrub, List<String> picks,
+                          List<Artefact> artefacts, List<TermStat> terms) {
 
     public AuditResult {
         Objects.requireNonNull(summary, "summary");
         findings = List.copyOf(findings);
         scrub = List.copyOf(scrub);
         picks = List.copyOf(picks);
+        artefacts = List.copyOf(artefacts);
+        terms = List.copyOf(terms);
+    }
+
+    public AuditResult(Summary summary, List<Finding> findings, List<Scrub> scrub, List<String> picks) {
+        this(summary, findings, scrub, picks, List.of(), List.of());
+    }
+
+    /** The artefacts a CI gate counts: not suppressed by the policy, at least {@code severity}. */
+    public List<Artefact> openArtefacts(Severity severity) {
+        return artefacts.stream().filter(a -> !a.suppressed() && a.severity().atLeast(severity)).toList();
+    }
+
+    /**
+     * What the audit reports: one header field, repeated line, address or identifier shape that the
+     * model leans on for one label, with the terms that make it up (docs/audit.md, "Artefacts").
+     *
+     * @param id          {@code kind-} and the first 12 hex digits of its {@link ArtefactIdentity}
+     *                    fingerprint: the same artefact has the same id in every run
+     * @param kind        where it sits
+     * @param severity    from its own evidence ({@link SeverityRules})
+     * @param label       the label it pushes the model towards
+     * @param pattern     what a reviewer recognises: {@code X-Intake-Route: acc7}, the repeated line,
+     *                    the host, the shape {@code HR-#####}
+     * @param support     corpus documents containing its most frequent term
+     * @param importance  sqrt of the absolute weights of all its terms summed over the explained
+     *                    documents (its terms' importances added in quadrature)
+     * @param association the z-statistic of its most associated term
+     * @param pLabelGivenTerm p̂(label | term) of that term
+     * @param confirmed   whether removing this artefact alone moved predictions
+     * @param suppressed  whether the policy accepts it as expected evidence
+     * @param policy      {@code accepted}, {@code artefact} or {@code null}
+     * @param policyNote  the reviewer's note on the matching rule, or {@code null}
+     * @param terms       its terms, most important first
+     * @param scrub       the effect of removing it alone from the explained documents assigned its label
+     * @param examples    explained documents where the model leaned on it, with every occurrence of
+     *                    its terms in its place marked
+     */
+    public record Artefact(
+            String id,
+            ArtefactKind kind,
+            Severity severity,
+            String label,
+            String pattern,
+            long support,
+            double importance,
+            double association,
+            double pLabelGivenTerm,
+            boolean confirmed,
+            boolean suppressed,
+            String policy,
+            String policyNote,
+            List<ArtefactTerm> terms,
+            Effect scrub,
+            List<Example> examples) {
+
+        public Artefact {
+            Objects.requireNonNull(id, "id");
+            Objects.requireNonNull(kind, "kind");
+            Objects.requireNonNull(severity, "severity");
+            Objects.requireNonNull(label, "label");
+            Objects.requireNonNull(pattern, "pattern");
+            Objects.requireNonNull(scrub, "scrub");
+            terms = List.copyOf(terms);
+            examples = List.copyOf(examples);
+        }
+
+        /** The identity SARIF fingerprints and a baseline compares. */
+        public ArtefactIdentity identity() {
+            return ArtefactIdentity.of(kind, label, pattern);
+        }
+
+        /** The terms alone. */
+        public List<String> termNames() {
+            return terms.stream().map(ArtefactTerm::term).toList();
+        }
+    }
+
+    /** One term of an artefact and its own statistics. */
+    public record ArtefactTerm(String term, double importance, double association, double weight) {
+        public ArtefactTerm {
+            Objects.requireNonNull(term, "term");
+        }
+    }
+
+    /**
+     * What one scrub did: documents rewritten (those it changed), of those the ones whose predicted
+     * label changed, the mean drop of the score that was pushed, and accuracy before and after on
+     * those with a gold label ({@code null} without).
+     */
+    public record Effect(int documents, int flips, double flipRate, double scoreDrop, Double accuracyBefore,
+                         Double accuracyAfter) {
+        public static final Effect NONE = new Effect(0, 0, 0, Double.NaN, null, null);
+    }
+
+    /**
+     * The statistics of one term the audit tested towards one label, flagged or not: what the
+     * importance–association chart draws.
+     *
+     * @param artefact the id of the artefact it belongs to, or {@code null}
+     */
+    public record TermStat(String term, String label, ArtefactKind kind, long support, double importance,
+                           double association, double pmi, double weight, int selectedIn, String artefact) {
+        public TermStat {
+            Objects.requireNonNull(term, "term");
+            Objects.requireNonNull(label, "label");
+            Objects.requireNonNull(kind, "kind");
+        }
     }
 
     /** An unmodifiable copy that keeps the caller's order, so JSON output is stable. */

@@ -184,6 +184,23 @@ public final class Auditor {
         }
         findings.sort(FindingRules.ORDER);
         List<Scrub> scrub = scrubKinds(findings, scrubTest, explained, scrubCorpus);
+
+        ArtefactAssembly assembly = new ArtefactAssembly(policy, rewriter, scrubTest);
+        List<AuditResult.Artefact> artefacts = new ArrayList<>();
+        Map<String, String> artefactOfTerm = new HashMap<>();
+        for (ArtefactGrouping.Group group : ArtefactGrouping.group(rules.candidates(), terms)) {
+            AuditResult.Artefact artefact = guarded("the explained documents while scrubbing the " + group.kind().key()
+                    + " artefact '" + group.pattern() + "'", () -> assembly.finish(group, explained, explanations,
+                    scoring.sampled()));
+            artefacts.add(artefact);
+            group.terms().forEach(t -> artefactOfTerm.put(t + '\u0000' + group.label(), artefact.id()));
+        }
+        artefacts.sort(ArtefactAssembly.ORDER);
+        List<AuditResult.TermStat> termStats = new ArrayList<>();
+        for (AuditResult.TermStat t : rules.terms()) {
+            termStats.add(new AuditResult.TermStat(t.term(), t.label(), t.kind(), t.support(), t.importance(),
+                    t.association(), t.pmi(), t.weight(), t.selectedIn(), artefactOfTerm.get(t.term() + '\u0000' + t.label())));
+        }
         progress.done();
 
         List<SubmodularPick.Row> rows = new ArrayList<>();
@@ -199,7 +216,7 @@ public final class Auditor {
                 retries.getAsLong(), model, corpusName, seed, settings, gold ? "gold" : "predicted", prior,
                 scoring.predictedCounts(), rules.threshold(), rules.tested(), picks.coverage(),
                 (System.nanoTime() - started) / 1_000_000);
-        return new Outcome(new AuditResult(summary, findings, scrub, picks.ids()), explanations);
+        return new Outcome(new AuditResult(summary, findings, scrub, picks.ids(), artefacts, termStats), explanations);
     }
 
     // ---- pass 1: score every document, count lines, draw the sample

@@ -30,6 +30,17 @@ public final class CorpusTerms implements Serializable {
     private final transient LineRepeats repeats;
     private final Map<String, long[]> df = new HashMap<>();
     private final Map<String, long[]> places = new HashMap<>();
+    /** Per term, its occurrences in each place by place id ({@link #placeId}): what groups terms into artefacts. */
+    private final Map<String, HashMap<String, Long>> placeCounts = new HashMap<>();
+    /** Per place id, the smallest way it was written: one spelling whatever order documents come in. */
+    private final Map<String, String> shown = new HashMap<>();
+    /** Per identifier place id, its smallest distinct values, at most {@link #VALUES_KEPT}: whether its digits vary. */
+    private final Map<String, java.util.TreeSet<String>> values = new HashMap<>();
+    /** Per term, its identifier occurrences that are a whole identifier (a code such as {@code xr980}). */
+    private final Map<String, long[]> wholeCodes = new HashMap<>();
+
+    /** Distinct values kept per identifier shape; enough to tell a shape whose digits vary from a fixed code. */
+    static final int VALUES_KEPT = 8;
     private final long[] labelTotals;
     private long documents;
 
@@ -47,6 +58,8 @@ public final class CorpusTerms implements Serializable {
         for (String term : terms) {
             df.put(term, new long[labels.size()]);
             places.put(term, new long[ArtefactKind.values().length]);
+            placeCounts.put(term, new HashMap<>());
+            wholeCodes.put(term, new long[1]);
         }
     }
 
@@ -66,6 +79,30 @@ public final class CorpusTerms implements Serializable {
         }
         other.df.forEach((term, counts) -> add(df.get(term), counts));
         other.places.forEach((term, counts) -> add(places.get(term), counts));
+        other.placeCounts.forEach((term, counts) -> {
+            Map<String, Long> into = placeCounts.get(term);
+            counts.forEach((id, n) -> into.merge(id, n, Long::sum));
+        });
+        other.shown.forEach(this::show);
+        other.values.forEach((id, vs) -> vs.forEach(v -> value(id, v)));
+        other.wholeCodes.forEach((term, n) -> wholeCodes.get(term)[0] += n[0]);
+    }
+
+    private void value(String id, String value) {
+        java.util.TreeSet<String> kept = values.computeIfAbsent(id, k -> new java.util.TreeSet<>());
+        kept.add(value);
+        if (kept.size() > VALUES_KEPT) {
+            kept.pollLast();
+        }
+    }
+
+    private void show(String id, String written) {
+        shown.merge(id, written, (a, b) -> a.compareTo(b) <= 0 ? a : b);
+    }
+
+    /** The id of a place across documents: its kind and its key. */
+    static String placeId(ArtefactKind kind, String key) {
+        return kind.key() + "\t" + key;
     }
 
     private static void add(long[] into, long[] counts) {
@@ -94,10 +131,64 @@ public final class CorpusTerms implements Serializable {
                 where = Places.of(text, repeats::isBoilerplate);
             }
             long[] p = places.get(unit.term());
+            Map<String, Long> keyed = placeCounts.get(unit.term());
             for (Span span : unit.spans()) {
-                p[where.kindOf(span).ordinal()]++;
+                Places.Place place = where.placeOf(span);
+                p[place == null ? ArtefactKind.CONTENT.ordinal() : place.kind().ordinal()]++;
+                if (place != null) {
+                    String id = placeId(place.kind(), place.key());
+                    keyed.merge(id, 1L, Long::sum);
+                    show(id, place.shown());
+                    if (place.kind() == ArtefactKind.IDENTIFIER) {
+                        value(id, text.substring(place.span().start(), place.span().end()).toLowerCase(java.util.Locale.ROOT));
+                        if (place.span().equals(span)) {
+                            wholeCodes.get(unit.term())[0]++;
+                        }
+                    }
+                }
             }
         }
+    }
+
+    /** A place of one kind in the corpus: its key and how it is shown. */
+    record PlaceRef(ArtefactKind kind, String key, String shown) {
+    }
+
+    /**
+     * The place of {@code kind} that holds most of the term's occurrences of that kind (ties to the
+     * smaller key), or {@code null} when none does.
+     */
+    PlaceRef dominantPlace(String term, ArtefactKind kind) {
+        Map<String, Long> counts = placeCounts.get(term);
+        if (counts == null) {
+            return null;
+        }
+        String prefix = kind.key() + "\t";
+        String best = null;
+        long most = 0;
+        for (Map.Entry<String, Long> e : counts.entrySet()) {
+            if (!e.getKey().startsWith(prefix)) {
+                continue;
+            }
+            if (e.getValue() > most || (e.getValue() == most && best != null && e.getKey().compareTo(best) < 0)) {
+                best = e.getKey();
+                most = e.getValue();
+            }
+        }
+        return best == null ? null : new PlaceRef(kind, best.substring(prefix.length()), shown.get(best));
+    }
+
+    /** How many distinct values the identifier place {@code key} took, counted up to {@link #VALUES_KEPT}. */
+    int distinctValues(String key) {
+        java.util.TreeSet<String> kept = values.get(placeId(ArtefactKind.IDENTIFIER, key));
+        return kept == null ? 0 : kept.size();
+    }
+
+    /** Share of the term's identifier occurrences that are a whole identifier by themselves. */
+    double wholeCodeShare(String term) {
+        long[] p = places.get(term);
+        long identifier = p == null ? 0 : p[ArtefactKind.IDENTIFIER.ordinal()];
+        return identifier == 0 ? 0 : (double) wholeCodes.get(term)[0] / identifier;
     }
 
     long documents() {

@@ -56,7 +56,7 @@ final class FindingRules {
     }
 
     /** The outcome: the candidates, and the test bookkeeping for the summary. */
-    record Outcome(List<Candidate> candidates, int tested, double threshold) {
+    record Outcome(List<Candidate> candidates, int tested, double threshold, List<AuditResult.TermStat> terms) {
     }
 
     private FindingRules() {
@@ -78,6 +78,7 @@ final class FindingRules {
         }
         double threshold = Association.threshold(alpha, Math.max(1, tested));
         List<Candidate> candidates = new ArrayList<>();
+        List<AuditResult.TermStat> stats = new ArrayList<>();
         for (TermWeights.Entry e : supporting) {
             Map<String, Long> df = corpus.df(e.term());
             long n = support(df);
@@ -87,11 +88,15 @@ final class FindingRules {
             double z = n >= MIN_SUPPORT ? Association.z(k, n, p0) : Double.NaN;
             boolean significant = z >= threshold;
             boolean important = e.importance() >= IMPORTANCE_SHARE * weights.maxImportance(e.label());
-            ArtefactKind kind = corpus.kind(e.term());
+            ArtefactKind kind = ArtefactGrouping.kindOf(e.term(), corpus);
             Optional<Policy.Rule> rule = policy.match(e.term());
             boolean marked = rule.map(r -> r.status() == Policy.Status.ARTEFACT).orElse(false);
             double pmi = Association.pmi(pHat, p0);
             boolean strong = significant && pmi >= MIN_PMI;
+            if (n >= MIN_SUPPORT || marked) {
+                stats.add(new AuditResult.TermStat(e.term(), e.label(), kind, n, e.importance(), z, pmi, e.meanWeight(),
+                        e.selected(), null));
+            }
             if ((important && strong && kind != ArtefactKind.CONTENT) || marked) {
                 Map<String, Double> shares = new LinkedHashMap<>();
                 corpus.kindShares(e.term()).forEach((kk, v) -> shares.put(kk.key(), v));
@@ -99,7 +104,7 @@ final class FindingRules {
                         significant, rule));
             }
         }
-        return new Outcome(candidates, tested, threshold);
+        return new Outcome(candidates, tested, threshold, stats);
     }
 
     /** Findings in report order: severity, then importance, then term and label. */

@@ -74,32 +74,56 @@ public final class Places {
     private static final int MIXED_MIN = 6;
 
     private final byte[] kinds;
+    /** For each character, the index in {@link #places} of the place that decided its kind; -1 in content. */
+    private final int[] owners;
+    private final List<Place> places;
 
-    private Places(byte[] kinds) {
+    private Places(byte[] kinds, int[] owners, List<Place> places) {
         this.kinds = kinds;
+        this.owners = owners;
+        this.places = List.copyOf(places);
+    }
+
+    /**
+     * One place of a text that is not content: a header field (with its continuation lines), a
+     * repeated line, an address or an identifier, and the key that groups it with the same place in
+     * other documents ({@link PlaceKeys}).
+     *
+     * @param span  where it is
+     * @param kind  its kind
+     * @param key   the grouping key: a field name, a line template, a host or an identifier shape,
+     *              normalised so that variants meet
+     * @param shown the same, as written in this text (a field name's case, a line as it stands)
+     */
+    public record Place(Span span, ArtefactKind kind, String key, String shown) {
     }
 
     /** The places of {@code text}; {@code boilerplate} says whether a trimmed line is repeated across the corpus. */
     public static Places of(String text, Predicate<String> boilerplate) {
         byte[] kinds = new byte[text.length()];
         Arrays.fill(kinds, (byte) ArtefactKind.CONTENT.ordinal());
+        int[] owners = new int[text.length()];
+        Arrays.fill(owners, -1);
+        List<Place> places = new java.util.ArrayList<>();
         List<Span> lines = TextLines.of(text);
         for (Span line : lines) {
-            if (boilerplate.test(text.substring(line.start(), line.end()))) {
-                mark(kinds, line, ArtefactKind.BOILERPLATE);
+            String content = text.substring(line.start(), line.end());
+            if (boilerplate.test(content)) {
+                String shown = content.strip();
+                add(kinds, owners, places, new Place(line, ArtefactKind.BOILERPLATE, PlaceKeys.lineTemplate(shown), shown));
             }
         }
         for (Pattern pattern : IDENTIFIER) {
-            markPattern(kinds, text, pattern, 0, ArtefactKind.IDENTIFIER);
+            markPattern(kinds, owners, places, text, pattern, 0, ArtefactKind.IDENTIFIER);
         }
-        markPattern(kinds, text, MIXED, MIXED_MIN, ArtefactKind.IDENTIFIER);
+        markPattern(kinds, owners, places, text, MIXED, MIXED_MIN, ArtefactKind.IDENTIFIER);
         for (Pattern pattern : ADDRESS) {
-            markPattern(kinds, text, pattern, 0, ArtefactKind.ADDRESS);
+            markPattern(kinds, owners, places, text, pattern, 0, ArtefactKind.ADDRESS);
         }
-        for (Span region : headerRegions(text, lines)) {
-            mark(kinds, region, ArtefactKind.HEADER);
+        for (Place field : headerFields(text, lines)) {
+            add(kinds, owners, places, field);
         }
-        return new Places(kinds);
+        return new Places(kinds, owners, places);
     }
 
     /** The kind of an occurrence: the most specific place any of its characters sits in. */
@@ -112,6 +136,27 @@ public final class Places {
     }
 
     /**
+     * The place that decides the kind of an occurrence (the first of its characters in the most
+     * specific place), or {@code null} when the occurrence is content.
+     */
+    public Place placeOf(Span span) {
+        int best = ArtefactKind.CONTENT.ordinal();
+        int owner = -1;
+        for (int i = span.start(); i < span.end() && i < kinds.length; i++) {
+            if (kinds[i] < best) {
+                best = kinds[i];
+                owner = owners[i];
+            }
+        }
+        return owner < 0 ? null : places.get(owner);
+    }
+
+    /** Every place found, in the order found (repeated lines, identifiers, addresses, header fields). */
+    public List<Place> places() {
+        return places;
+    }
+
+    /**
      * The header regions of a text: the leading block of field lines (after an optional mbox
      * {@code From } line; folded continuation lines included, RFC 5322 §2.2.3), every run of two
      * or more field lines elsewhere, single field lines whose name is metadata-style, and the
@@ -119,20 +164,37 @@ public final class Places {
      */
     static List<Span> headerRegions(String text, List<Span> lines) {
         java.util.ArrayList<Span> regions = new java.util.ArrayList<>();
+        scanHeaders(text, lines, regions, new java.util.ArrayList<>());
+        return regions;
+    }
+
+    /**
+     * The header regions of {@link #headerRegions} cut into fields: each field line with its
+     * folded continuation lines, keyed by its field name in lower case (RFC 5322 §1.2.2: field
+     * names are case-insensitive); the mbox separator line is the field {@code From_}.
+     */
+    static List<Place> headerFields(String text, List<Span> lines) {
+        List<Place> fields = new java.util.ArrayList<>();
+        scanHeaders(text, lines, new java.util.ArrayList<>(), fields);
+        return fields;
+    }
+
+    private static void scanHeaders(String text, List<Span> lines, List<Span> regions, List<Place> fields) {
         int i = 0;
         if (!lines.isEmpty() && isMboxFrom(text, lines.get(0))) {
             regions.add(lines.get(0));
+            fields.add(new Place(lines.get(0), ArtefactKind.HEADER, "from_", "From_"));
             i = 1;
         }
         while (i < lines.size()) {
             int runStart = i;
-            int fields = 0;
+            int count = 0;
             int j = i;
             while (j < lines.size()) {
                 String line = slice(text, lines.get(j));
                 if (FIELD.matcher(line).lookingAt()) {
-                    fields++;
-                } else if (fields > 0 && !line.isBlank() && (line.charAt(0) == ' ' || line.charAt(0) == '\t')) {
+                    count++;
+                } else if (count > 0 && !line.isBlank() && (line.charAt(0) == ' ' || line.charAt(0) == '\t')) {
                     // folded continuation of the field above
                 } else {
                     break;
@@ -140,20 +202,43 @@ public final class Places {
                 j++;
             }
             boolean leading = runStart <= 1 && (j >= lines.size() || slice(text, lines.get(j)).isBlank());
-            if (fields >= 2 || (fields == 1 && leading)) {
+            if (count >= 2 || (count == 1 && leading)) {
                 regions.add(new Span(lines.get(runStart).start(), lines.get(j - 1).end()));
-            } else if (fields == 1) {
+                fieldsOf(text, lines, runStart, j, fields);
+            } else if (count == 1) {
                 String line = slice(text, lines.get(runStart));
                 java.util.regex.Matcher m = FIELD.matcher(line);
                 m.lookingAt();
                 int start = lines.get(runStart).start();
-                regions.add(METADATA_NAME.matcher(m.group(1)).matches()
+                String name = m.group(1);
+                Span region = METADATA_NAME.matcher(name).matches()
                         ? new Span(start, lines.get(j - 1).end())
-                        : new Span(start, start + m.end(1)));
+                        : new Span(start, start + m.end(1));
+                regions.add(region);
+                fields.add(new Place(region, ArtefactKind.HEADER, PlaceKeys.fieldKey(name), name));
             }
             i = Math.max(j, i + 1);
         }
-        return regions;
+    }
+
+    /** The fields of the block of lines {@code [from, to)}: each field line with the continuation lines after it. */
+    private static void fieldsOf(String text, List<Span> lines, int from, int to, List<Place> fields) {
+        int k = from;
+        while (k < to) {
+            java.util.regex.Matcher m = FIELD.matcher(slice(text, lines.get(k)));
+            if (!m.lookingAt()) {
+                k++; // a continuation line before any field cannot start a block; kept for safety
+                continue;
+            }
+            int last = k + 1;
+            while (last < to && !FIELD.matcher(slice(text, lines.get(last))).lookingAt()) {
+                last++;
+            }
+            String name = m.group(1);
+            fields.add(new Place(new Span(lines.get(k).start(), lines.get(last - 1).end()), ArtefactKind.HEADER,
+                    PlaceKeys.fieldKey(name), name));
+            k = last;
+        }
     }
 
     private static String slice(String text, Span span) {
@@ -167,7 +252,8 @@ public final class Places {
     }
 
     /** Marks every match of at least {@code minLength} characters, leading white space left out. */
-    private static void markPattern(byte[] kinds, String text, Pattern pattern, int minLength, ArtefactKind kind) {
+    private static void markPattern(byte[] kinds, int[] owners, List<Place> places, String text, Pattern pattern,
+            int minLength, ArtefactKind kind) {
         Matcher m = pattern.matcher(text);
         while (m.find()) {
             int start = m.start();
@@ -175,16 +261,26 @@ public final class Places {
                 start++;
             }
             if (m.end() - start >= minLength) {
-                mark(kinds, new Span(start, m.end()), kind);
+                String match = text.substring(start, m.end());
+                String key = kind == ArtefactKind.ADDRESS ? PlaceKeys.host(match) : PlaceKeys.shapeKey(match);
+                String shown = kind == ArtefactKind.ADDRESS ? key : PlaceKeys.shape(match);
+                add(kinds, owners, places, new Place(new Span(start, m.end()), kind, key, shown));
             }
         }
     }
 
-    private static void mark(byte[] kinds, Span span, ArtefactKind kind) {
-        byte k = (byte) kind.ordinal();
-        for (int i = span.start(); i < span.end(); i++) {
+    /**
+     * Records {@code place} and marks its characters: a more specific kind takes a character over;
+     * among places of one kind, the first found keeps it (a ticket code before the number inside it).
+     */
+    private static void add(byte[] kinds, int[] owners, List<Place> places, Place place) {
+        int index = places.size();
+        places.add(place);
+        byte k = (byte) place.kind().ordinal();
+        for (int i = place.span().start(); i < place.span().end(); i++) {
             if (kinds[i] > k) {
                 kinds[i] = k;
+                owners[i] = index;
             }
         }
     }

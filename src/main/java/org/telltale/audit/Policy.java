@@ -23,8 +23,15 @@ import org.telltale.TelltaleException;
  *   {"term": "meter", "status": "accepted", "note": "meter talk is the billing queue's real evidence"},
  *   {"pattern": "ogx\\d*", "status": "artefact", "note": "outage ticket prefix"}]}</pre>
  * A rule names one {@code term} exactly or a {@code pattern} (a Java regular expression that must
- * match the whole term). {@code accepted} findings are reported as suppressed, never dropped;
- * {@code artefact} terms are always findings. The first matching rule wins.
+ * match the whole term), or a whole artefact by its kind and a glob over its pattern:
+ * <pre>  {"boilerplate": "Exported by Casefile*", "status": "accepted", "note": "archive footer"},
+ *   {"header": "X-Intake-*", "status": "artefact", "note": "gateway stamps"},
+ *   {"identifier": "HR-#####", "status": "artefact", "note": "returns case tag"}</pre>
+ * In a glob {@code *} stands for any run of characters and {@code ?} for one; case, Unicode form
+ * and runs of white space do not matter ({@link ArtefactIdentity#normalise}); a header glob
+ * matches the field name or the whole pattern. {@code accepted} terms and artefacts are reported
+ * as suppressed, never dropped; {@code artefact} terms are always flagged, {@code artefact}
+ * artefacts at least medium. The first matching rule wins.
  *
  * <p>Immutable.
  */
@@ -40,15 +47,78 @@ public final class Policy {
         }
     }
 
-    /** One rule: exactly one of {@code term} and {@code pattern}, a status and the reviewer's note. */
-    public record Rule(String term, Pattern pattern, Status status, String note) {
+    /**
+     * One rule: exactly one of {@code term}, {@code pattern} and an artefact's {@code kind} with its
+     * {@code glob}; a status and the reviewer's note.
+     */
+    public record Rule(String term, Pattern pattern, ArtefactKind kind, String glob, Status status, String note) {
+        public Rule(String term, Pattern pattern, Status status, String note) {
+            this(term, pattern, null, null, status, note);
+        }
+
+        /** Whether this is a rule about whole artefacts. */
+        public boolean byArtefact() {
+            return kind != null;
+        }
+
         boolean matches(String candidate) {
+            if (kind != null) {
+                return false;
+            }
             return term != null ? term.equals(candidate) : pattern.matcher(candidate).matches();
+        }
+
+        boolean matches(ArtefactKind artefactKind, String artefactPattern) {
+            if (kind != artefactKind) {
+                return false;
+            }
+            String wanted = ArtefactIdentity.normalise(glob);
+            String text = ArtefactIdentity.normalise(artefactPattern);
+            if (kind == ArtefactKind.HEADER) {
+                int colon = text.indexOf(": ");
+                if (colon >= 0 && globMatches(wanted, text.substring(0, colon))) {
+                    return true;
+                }
+            }
+            return globMatches(wanted, text);
         }
     }
 
+    /**
+     * Whether {@code glob} ({@code *} any run, {@code ?} one character, the rest literal) matches
+     * all of {@code text}: the greedy wildcard match with one backtrack point, no recursion, at most
+     * |glob| · |text| steps (common practice).
+     */
+    static boolean globMatches(String glob, String text) {
+        int g = 0;
+        int t = 0;
+        int star = -1;
+        int resume = 0;
+        while (t < text.length()) {
+            if (g < glob.length() && (glob.charAt(g) == '?' || glob.charAt(g) == text.charAt(t)) && glob.charAt(g) != '*') {
+                g++;
+                t++;
+            } else if (g < glob.length() && glob.charAt(g) == '*') {
+                star = g++;
+                resume = t;
+            } else if (star >= 0) {
+                g = star + 1;
+                t = ++resume;
+            } else {
+                return false;
+            }
+        }
+        while (g < glob.length() && glob.charAt(g) == '*') {
+            g++;
+        }
+        return g == glob.length();
+    }
+
     private static final Set<String> TOP_KEYS = Set.of("format", "version", "rules");
-    private static final Set<String> RULE_KEYS = Set.of("term", "pattern", "status", "note");
+    private static final List<ArtefactKind> RULE_KINDS = List.of(ArtefactKind.HEADER, ArtefactKind.ADDRESS,
+            ArtefactKind.IDENTIFIER, ArtefactKind.BOILERPLATE);
+    private static final Set<String> RULE_KEYS = Set.of("term", "pattern", "header", "address", "identifier",
+            "boilerplate", "status", "note");
     private static final Policy EMPTY = new Policy(List.of());
 
     private final List<Rule> rules;
@@ -65,9 +135,14 @@ public final class Policy {
         return rules;
     }
 
-    /** The first rule that matches {@code term}. */
+    /** The first term rule that matches {@code term}. */
     public Optional<Rule> match(String term) {
         return rules.stream().filter(r -> r.matches(term)).findFirst();
+    }
+
+    /** The first artefact rule that matches an artefact of {@code kind} with {@code pattern}. */
+    public Optional<Rule> matchArtefact(ArtefactKind kind, String pattern) {
+        return rules.stream().filter(r -> r.matches(kind, pattern)).findFirst();
     }
 
     /** Reads a policy file; every error names the file and the rule. */
@@ -120,8 +195,20 @@ public final class Policy {
         rejectUnknown(node, RULE_KEYS, at);
         String term = text(node, "term", at);
         String pattern = text(node, "pattern", at);
-        if ((term == null) == (pattern == null)) {
-            throw new TelltaleException(at + " needs exactly one of \"term\" and \"pattern\"");
+        ArtefactKind kind = null;
+        String glob = null;
+        int named = (term == null ? 0 : 1) + (pattern == null ? 0 : 1);
+        for (ArtefactKind k : RULE_KINDS) {
+            String g = text(node, k.key(), at);
+            if (g != null) {
+                named++;
+                kind = k;
+                glob = g;
+            }
+        }
+        if (named != 1) {
+            throw new TelltaleException(at + " needs exactly one of \"term\", \"pattern\", \"header\", \"address\", "
+                    + "\"identifier\" and \"boilerplate\"");
         }
         String statusText = text(node, "status", at);
         Status status;
@@ -144,7 +231,7 @@ public final class Policy {
                 throw new TelltaleException(at + ": bad pattern '" + pattern + "': " + e.getDescription());
             }
         }
-        return new Rule(term, compiled, status, note);
+        return new Rule(term, compiled, kind, glob, status, note);
     }
 
     private static String text(JsonNode node, String name, String at) {

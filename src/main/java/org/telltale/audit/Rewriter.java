@@ -83,6 +83,89 @@ final class Rewriter {
         return cut(text, cuts);
     }
 
+    /** What one artefact's scrub removes: its place (kind and key) wherever it holds one of its terms. */
+    record Target(ArtefactKind kind, String key, Set<String> terms) {
+    }
+
+    /** How an artefact of {@code kind} is removed: whole lines, whole matches, or its terms. */
+    static String artefactMode(ArtefactKind kind) {
+        return switch (kind) {
+            case HEADER, BOILERPLATE -> "lines";
+            case ADDRESS, IDENTIFIER -> "matches";
+            case CONTENT -> "terms";
+        };
+    }
+
+    /**
+     * {@code text} without the given artefacts (docs/audit.md, "Scrub test"): a header artefact
+     * loses its field lines, a boilerplate artefact its repeated lines (each with its line end),
+     * an address every address at its host, an identifier every identifier of its shape — each
+     * only where the place holds one of the artefact's terms — and a content artefact its terms.
+     * The same string when nothing matched.
+     */
+    String scrub(String text, List<Target> targets) {
+        Set<String> all = new java.util.HashSet<>();
+        targets.forEach(t -> all.addAll(t.terms()));
+        List<Unit> units = new ArrayList<>();
+        for (Unit unit : TermIndex.of(text, analyzer, UnitKind.WORD).units()) {
+            if (all.contains(unit.term())) {
+                units.add(unit);
+            }
+        }
+        if (units.isEmpty()) {
+            return text;
+        }
+        Places places = null;
+        List<Span> cuts = new ArrayList<>();
+        for (Target target : targets) {
+            List<Span> hits = new ArrayList<>();
+            for (Unit unit : units) {
+                if (target.terms().contains(unit.term())) {
+                    hits.addAll(unit.spans());
+                }
+            }
+            if (hits.isEmpty()) {
+                continue;
+            }
+            if (target.kind() == ArtefactKind.CONTENT) {
+                cuts.addAll(hits);
+                continue;
+            }
+            if (places == null) {
+                places = Places.of(text, boilerplate);
+            }
+            for (Places.Place place : places.places()) {
+                if (place.kind() == target.kind() && place.key().equals(target.key())
+                        && hits.stream().anyMatch(place.span()::overlaps)) {
+                    cuts.add(Rewriter.modeOf(target.kind()) == Mode.LINES ? TextLines.withTerminator(text, place.span())
+                            : place.span());
+                }
+            }
+        }
+        return cuts.isEmpty() ? text : cut(text, cuts);
+    }
+
+    /**
+     * The occurrences of {@code target}'s terms in {@code text} that sit in its place (a field of
+     * its name, a line of its template, …; anywhere for a content artefact): what a report marks.
+     */
+    List<Span> marks(String text, Target target) {
+        List<Span> hits = occurrences(text, target.terms());
+        if (hits.isEmpty() || target.kind() == ArtefactKind.CONTENT) {
+            return hits;
+        }
+        Places places = Places.of(text, boilerplate);
+        List<Span> out = new ArrayList<>();
+        for (Span hit : hits) {
+            Places.Place place = places.placeOf(hit);
+            if (place != null && place.kind() == target.kind() && place.key().equals(target.key())) {
+                out.add(hit);
+            }
+        }
+        out.sort(null);
+        return out;
+    }
+
     /** {@code text} without the given spans, which may overlap. */
     static String cut(String text, List<Span> spans) {
         List<Span> sorted = new ArrayList<>(spans);

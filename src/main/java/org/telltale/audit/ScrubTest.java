@@ -44,6 +44,11 @@ final class ScrubTest {
             return labelled == 0 ? null : (double) correctAfter / labelled;
         }
 
+        /** The public face of these sums. */
+        AuditResult.Effect result() {
+            return new AuditResult.Effect(documents, flips, flipRate(), meanDrop(), accuracyBefore(), accuracyAfter());
+        }
+
         Effect plus(Effect o) {
             return new Effect(documents + o.documents, flips + o.flips, totalDrop + o.totalDrop,
                     labelled + o.labelled, correctBefore + o.correctBefore, correctAfter + o.correctAfter);
@@ -98,6 +103,64 @@ final class ScrubTest {
             }
         }
         return byTerm;
+    }
+
+    /**
+     * Removes one artefact alone from the documents the model assigned to its {@code label} and
+     * measures the effect on those it changed: flips away from the label and the drop of its score.
+     */
+    Effect artefact(String label, Rewriter.Target target, List<Scored> documents) {
+        List<Scored> changed = new ArrayList<>();
+        List<String> texts = new ArrayList<>();
+        for (Scored s : documents) {
+            if (!s.predicted().equals(label)) {
+                continue;
+            }
+            String rewritten = rewriter.scrub(s.doc().text(), List.of(target));
+            if (!rewritten.equals(s.doc().text())) {
+                changed.add(s);
+                texts.add(rewritten);
+            }
+        }
+        return measure(changed, texts, label);
+    }
+
+    /** Removes {@code targets} together from every document and measures the effect on each one's own prediction. */
+    Effect together(List<Rewriter.Target> targets, List<Scored> documents) {
+        List<Scored> changed = new ArrayList<>();
+        List<String> texts = new ArrayList<>();
+        for (Scored s : documents) {
+            String rewritten = rewriter.scrub(s.doc().text(), targets);
+            if (!rewritten.equals(s.doc().text())) {
+                changed.add(s);
+                texts.add(rewritten);
+            }
+        }
+        return measure(changed, texts, null);
+    }
+
+    /** As {@link #together}, for documents whose original scores are not known yet (for {@code --scrub-all}). */
+    Effect togetherUnscored(List<Rewriter.Target> targets, List<Document> documents) {
+        List<Document> changed = new ArrayList<>();
+        List<String> texts = new ArrayList<>();
+        for (Document d : documents) {
+            String rewritten = rewriter.scrub(d.text(), targets);
+            if (!rewritten.equals(d.text())) {
+                changed.add(d);
+                texts.add(rewritten);
+            }
+        }
+        if (changed.isEmpty()) {
+            return Effect.NONE;
+        }
+        ScoreMatrix before = classifier.score(changed.stream().map(Document::text).toList(),
+                changed.stream().map(Document::id).toList());
+        calls++;
+        List<Scored> scored = new ArrayList<>();
+        for (int i = 0; i < changed.size(); i++) {
+            scored.add(new Scored(changed.get(i), before.predicted(i), before.row(i)));
+        }
+        return measure(scored, texts, null);
     }
 
     /** Scrubs {@code terms} as {@code kind} prescribes from every document, and measures the effect. */

@@ -49,4 +49,39 @@ class PolicyTest {
         assertTrue(regex.getMessage().startsWith("p.json: rules[0]: bad pattern"), regex.getMessage());
         assertThrows(TelltaleException.class, () -> Policy.read(Path.of("no-such-policy.json")));
     }
+
+    @Test
+    void artefactRulesMatchAKindAndAGlobOverThePattern() {
+        Policy policy = Policy.parse("""
+                {"rules": [
+                  {"boilerplate": "[Exported by Casefile*", "status": "accepted", "note": "archive footer"},
+                  {"header": "X-Intake-*", "status": "artefact", "note": "gateway stamps"},
+                  {"identifier": "HR-#####", "status": "artefact", "note": "returns case tag"},
+                  {"term": "meter", "status": "accepted", "note": "billing evidence"}]}
+                """, "p.json");
+        assertEquals("archive footer", policy.matchArtefact(ArtefactKind.BOILERPLATE,
+                "[exported by casefile   Archive 3.2 · retention class B]").orElseThrow().note());
+        assertTrue(policy.matchArtefact(ArtefactKind.HEADER, "[Exported by Casefile Archive]").isEmpty(),
+                "a rule is for one kind");
+        assertEquals("gateway stamps", policy.matchArtefact(ArtefactKind.HEADER, "X-Intake-Route: acc7").orElseThrow().note());
+        assertTrue(policy.matchArtefact(ArtefactKind.HEADER, "X-Route: acc7").isEmpty());
+        assertEquals(Policy.Status.ARTEFACT, policy.matchArtefact(ArtefactKind.IDENTIFIER, "hr-#####").orElseThrow().status());
+        assertTrue(policy.matchArtefact(ArtefactKind.IDENTIFIER, "HR-####").isEmpty(), "# is literal in a glob");
+        assertTrue(policy.match("meter").isPresent() && policy.match("casefile").isEmpty(),
+                "term rules and artefact rules do not mix");
+        TelltaleException two = assertThrows(TelltaleException.class, () -> Policy.parse(
+                "{\"rules\":[{\"header\":\"a\",\"term\":\"b\",\"status\":\"accepted\",\"note\":\"x\"}]}", "p.json"));
+        assertTrue(two.getMessage().contains("exactly one"), two.getMessage());
+    }
+
+    @Test
+    void globsMatchWholeTextsWithStarsAndQuestionMarks() {
+        // Wildcard semantics as in POSIX fnmatch without brackets (from memory).
+        assertTrue(Policy.globMatches("a*b?d", "axxxbcd"));
+        assertTrue(Policy.globMatches("*", ""));
+        assertTrue(Policy.globMatches("**a", "ba"));
+        assertTrue(!Policy.globMatches("a*b", "ab c"));
+        assertTrue(!Policy.globMatches("abc", "abcd"));
+        assertTrue(Policy.globMatches("*x*y*", "aaxbbbyc"));
+    }
 }

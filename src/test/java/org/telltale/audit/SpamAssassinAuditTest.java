@@ -95,6 +95,20 @@ class SpamAssassinAuditTest {
         AuditResult.Scrub scrub = result.scrub().stream().filter(s -> s.kind() == ArtefactKind.HEADER).findFirst()
                 .orElseThrow(() -> new AssertionError("no header scrub: " + result.scrub()));
         assertTrue(scrub.flips() > 0, "the header scrub moved no prediction: " + scrub);
+
+        // Artefacts: one per header field and label, each scrubbed on its own (its field lines cut
+        // from the explained messages assigned its label), and together they move predictions.
+        String artefacts = ArtefactAuditTest.describe(result);
+        List<AuditResult.Artefact> fields = result.artefacts().stream().filter(a -> a.kind() == ArtefactKind.HEADER).toList();
+        assertFalse(fields.isEmpty(), "no header artefact:" + artefacts);
+        java.util.Set<String> seen = new java.util.HashSet<>();
+        for (AuditResult.Artefact a : fields) {
+            String field = a.pattern().substring(0, a.pattern().indexOf(": "));
+            assertTrue(seen.add(field.toLowerCase(java.util.Locale.ROOT) + " → " + a.label()),
+                    "two artefacts for the field " + field + ":" + artefacts);
+            assertTrue(a.scrub().documents() > 0, "not scrub-tested on its own: " + a.id() + artefacts);
+        }
+        assertTrue(fields.stream().anyMatch(AuditResult.Artefact::confirmed), artefacts);
     }
 
     private static long occurrences(String text, String term) {
