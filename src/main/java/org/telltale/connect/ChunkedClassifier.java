@@ -27,14 +27,13 @@ import org.telltale.model.TextClassifier;
  * retries transient failures with backoff, validates every answer and puts the rows back in the
  * caller's order. Thread-safe; calls from several threads share the same gate.
  *
- * <p>Each batch runs on a worker that encodes it before asking the gate for a place, so a
- * prepared request is waiting whenever a place frees, and decodes and validates the answer after
- * giving its place back. There are a few more workers than the most places the gate can give,
- * which bounds the prepared requests held in memory.
+ * <p>Each batch runs on a worker that reserves a place among the prepared requests, encodes its
+ * batch, then asks the gate for a place in flight, so a prepared request is waiting whenever a
+ * place frees; it decodes and validates the answer after giving its place back. The gate keeps at
+ * most {@link InFlightGate#PREPARED_AHEAD} requests prepared beyond its limit, which bounds the
+ * bodies held in memory and the encoding done ahead of need.
  */
 final class ChunkedClassifier implements TextClassifier {
-    /** Workers beyond the gate's largest limit: requests prepared and waiting for a place. */
-    static final int PREPARED_AHEAD = 4;
 
     private final BatchScorer scorer;
     private final int batch;
@@ -61,7 +60,7 @@ final class ChunkedClassifier implements TextClassifier {
         this.validator = new ResponseValidator(settings.scores());
         this.redactor = redactor;
         this.description = redactor.redact(description);
-        int workers = policy.max() + PREPARED_AHEAD;
+        int workers = policy.max() + InFlightGate.PREPARED_AHEAD;
         this.pool = new ThreadPoolExecutor(workers, workers, 30, TimeUnit.SECONDS, new LinkedBlockingQueue<>(), daemonThreads());
         this.pool.allowCoreThreadTimeOut(true);
     }
@@ -102,14 +101,17 @@ final class ChunkedClassifier implements TextClassifier {
     }
 
     private double[][] scoreWithRetries(List<String> chunk, ResponseValidator.BatchPlace place, double[][] logits) {
-        BatchScorer.Exchange exchange = scorer.prepare(chunk);
+        reserve();
+        boolean reserved = true;
         InFlightGate.Ticket kept = null;
         try {
+            BatchScorer.Exchange exchange = scorer.prepare(chunk);
             for (int attempt = 0; ; attempt++) {
                 if (Thread.currentThread().isInterrupted()) {
                     throw new CancellationException();
                 }
-                InFlightGate.Ticket ticket = kept != null ? gate.again(kept) : admit();
+                InFlightGate.Ticket ticket = kept != null ? gate.again(kept) : admit(reserved);
+                reserved = false;
                 kept = null;
                 BatchScorer.Reply reply;
                 try {
@@ -158,12 +160,24 @@ final class ChunkedClassifier implements TextClassifier {
             if (kept != null) {
                 gate.release(kept);
             }
+            if (reserved) {
+                gate.unreserve();
+            }
         }
     }
 
-    private InFlightGate.Ticket admit() {
+    private void reserve() {
         try {
-            return gate.admit();
+            gate.reserve();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new CancellationException();
+        }
+    }
+
+    private InFlightGate.Ticket admit(boolean reserved) {
+        try {
+            return gate.admit(reserved);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new CancellationException();

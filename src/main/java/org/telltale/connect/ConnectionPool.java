@@ -23,6 +23,7 @@ final class ConnectionPool implements AutoCloseable {
     private final Set<HttpConnection> all = ConcurrentHashMap.newKeySet();
     private volatile boolean closed;
 
+    /** {@code tls} is used for https origins only, and may be null for http ones. */
     ConnectionPool(URI origin, SSLSocketFactory tls) {
         this.origin = origin;
         this.tls = tls;

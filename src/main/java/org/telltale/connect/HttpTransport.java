@@ -69,8 +69,9 @@ final class HttpTransport implements AutoCloseable {
 
     private ConnectionPool pool(URI uri) {
         String origin = uri.getScheme() + "://" + uri.getRawAuthority();
-        return pools.computeIfAbsent(origin, o -> new ConnectionPool(uri,
-                tls != null ? tls : (SSLSocketFactory) SSLSocketFactory.getDefault()));
+        // The default TLS context loads the trust store (about a second in a fresh JVM): only for https.
+        return pools.computeIfAbsent(origin, o -> new ConnectionPool(uri, !"https".equals(uri.getScheme()) ? null
+                : tls != null ? tls : (SSLSocketFactory) SSLSocketFactory.getDefault()));
     }
 
     private byte[] exchange(String method, URI uri, byte[] request) {

@@ -9,6 +9,11 @@ import java.util.concurrent.locks.ReentrantLock;
  * each outcome back to the policy: a fixed limit ({@code --parallel N}) or {@link AdaptiveLimit}
  * ({@code --parallel auto}). Also keeps how long each limit was in force while requests were in
  * flight, for the level a run settled at. Thread-safe.
+ *
+ * <p>Before a request is encoded it {@linkplain #reserve reserves} a place among the prepared
+ * ones: at most {@link #PREPARED_AHEAD} more than the limit are prepared or in flight. So a few
+ * bodies are always ready when a place frees, and a call of many batches does not encode them
+ * all at once (which, at the start of a run, took the CPU from the first requests' answers).
  */
 final class InFlightGate {
     /** Decides the limit from the outcomes; called under the gate's lock. */
@@ -59,7 +64,11 @@ final class InFlightGate {
     private final Condition freed = lock.newCondition();
     private final Policy policy;
     private final long[] nanosAtLimit;
+    /** Requests encoded, or being encoded, beyond those in flight: ready when a place frees. */
+    static final int PREPARED_AHEAD = 4;
+
     private int inFlight;
+    private int prepared;
     private int waiting;
     private int peak;
     private long lastEvent = System.nanoTime();
@@ -69,8 +78,35 @@ final class InFlightGate {
         this.nanosAtLimit = new long[policy.max() + 1];
     }
 
-    /** Waits until the request may go, then counts it in flight. */
-    Ticket admit() throws InterruptedException {
+    /** Waits until fewer than the limit plus {@link #PREPARED_AHEAD} are prepared or in flight, then counts one prepared. */
+    void reserve() throws InterruptedException {
+        lock.lockInterruptibly();
+        try {
+            while (inFlight + prepared >= policy.limit() + PREPARED_AHEAD) {
+                freed.await(1, TimeUnit.SECONDS);
+            }
+            prepared++;
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    /** Gives back a reservation that will not be admitted (its encoding failed, or it was cancelled). */
+    void unreserve() {
+        lock.lock();
+        try {
+            prepared--;
+            freed.signalAll();
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    /**
+     * Waits until the request may go, then counts it in flight; {@code reserved} says it holds a
+     * reservation from {@link #reserve}, which admission turns into its place.
+     */
+    Ticket admit(boolean reserved) throws InterruptedException {
         lock.lockInterruptibly();
         try {
             waiting++;
@@ -82,6 +118,9 @@ final class InFlightGate {
                 waiting--;
             }
             account();
+            if (reserved) {
+                prepared--;
+            }
             inFlight++;
             peak = Math.max(peak, inFlight);
             return new Ticket(System.nanoTime(), inFlight);

@@ -107,6 +107,69 @@ class ChunkedClassifierTest {
     }
 
     @Test
+    void encodesOnlyAFewBatchesAheadOfTheLimitNotTheWholeCall() {
+        // A limit of 2 that could grow to 32: 32 + 4 workers, but only 2 + PREPARED_AHEAD bodies may exist at once.
+        InFlightGate.Policy two = new InFlightGate.Policy() {
+            @Override
+            public int limit() {
+                return 2;
+            }
+
+            @Override
+            public int max() {
+                return 32;
+            }
+
+            @Override
+            public boolean adaptive() {
+                return true;
+            }
+        };
+        AtomicInteger prepared = new AtomicInteger();
+        AtomicInteger mostPrepared = new AtomicInteger();
+        BatchScorer counting = new BatchScorer() {
+            @Override
+            public RawScores score(List<String> texts) {
+                throw new AssertionError("prepare is used");
+            }
+
+            @Override
+            public Exchange prepare(List<String> texts) {
+                mostPrepared.accumulateAndGet(prepared.incrementAndGet(), Math::max);
+                return () -> {
+                    sleepMillis(2);
+                    prepared.decrementAndGet();
+                    double[][] rows = new double[texts.size()][];
+                    for (int i = 0; i < rows.length; i++) {
+                        rows[i] = LengthModel.expected(texts.get(i));
+                    }
+                    return Reply.of(new RawScores(LengthModel.LABELS, rows, "{}"), true);
+                };
+            }
+
+            @Override
+            public String describe() {
+                return "counting";
+            }
+        };
+        try (var c = new ChunkedClassifier(counting, fast(0).withBatch(1), two, Redactor.none(), "counting")) {
+            List<String> in = texts(60);
+            ScoreMatrix m = c.score(in);
+            assertArrayEquals(LengthModel.expected(in.get(59)), m.row(59));
+            assertTrue(mostPrepared.get() <= 2 + InFlightGate.PREPARED_AHEAD, "at most " + mostPrepared.get());
+            assertTrue(mostPrepared.get() > 2, "nothing prepared ahead: " + mostPrepared.get());
+        }
+    }
+
+    private static void sleepMillis(long ms) {
+        try {
+            Thread.sleep(ms);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+
+    @Test
     void theErrorShownIsTheFirstThatHappenedNotTheLowestBatchs() {
         // Batch 1 fails only after batch 2 has failed: the call must report batch 2's error.
         CountDownLatch secondFailed = new CountDownLatch(1);
