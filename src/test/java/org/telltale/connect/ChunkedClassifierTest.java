@@ -9,6 +9,7 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
 import org.telltale.model.ClassifierException;
@@ -171,20 +172,21 @@ class ChunkedClassifierTest {
 
     @Test
     void theErrorShownIsTheFirstThatHappenedNotTheLowestBatchs() {
-        // Batch 1 fails only after batch 2 has failed: the call must report batch 2's error.
-        CountDownLatch secondFailed = new CountDownLatch(1);
+        // Batch 1 fails only after batch 2 has failed: the call must report batch 2's error. Batch 1
+        // waits until it is cancelled (the call stops at the first failure), or 10 s at most, so its
+        // failure can only come second however the threads are scheduled.
+        CountDownLatch untilCancelled = new CountDownLatch(1); // never counted down
         BatchScorer laterFirst = new BatchScorer() {
             @Override
             public RawScores score(List<String> texts) {
                 if (texts.get(0).equals("late")) {
                     try {
-                        secondFailed.await();
+                        untilCancelled.await(10, TimeUnit.SECONDS);
                     } catch (InterruptedException e) {
                         Thread.currentThread().interrupt();
                     }
                     throw new ClassifierException("late failure");
                 }
-                secondFailed.countDown();
                 throw new ClassifierException("early failure");
             }
 
