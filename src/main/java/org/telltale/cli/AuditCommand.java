@@ -10,6 +10,7 @@ import org.telltale.ExitCodes;
 import org.telltale.UsageException;
 import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditSettings;
+import org.telltale.audit.Baseline;
 import org.telltale.audit.Auditor;
 import org.telltale.audit.Journal;
 import org.telltale.audit.OutputFolder;
@@ -23,6 +24,7 @@ import org.telltale.connect.ModelIdentity;
 import org.telltale.model.TextClassifier;
 import org.telltale.report.html.HtmlReports;
 import org.telltale.report.json.AuditJson;
+import org.telltale.report.json.BaselineJson;
 import org.telltale.report.json.ExplanationsJson;
 import org.telltale.report.sarif.SarifWriter;
 import picocli.CommandLine.Command;
@@ -35,7 +37,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "audit", mixinStandardHelpOptions = false, versionProvider = VersionProvider.class,
         description = {"Scores a whole corpus, explains a stratified sample, and reports terms the model leans on "
                 + "that sit in headers, addresses, identifiers or boilerplate; proves the dependence by scrubbing.",
-            "Exit codes: 0 clean, 3 findings at or above --fail-on remain, 1 error, 2 usage."})
+            "Exit codes: 0 clean, 3 findings at or above --fail-on remain (with --baseline: new ones), 1 error, 2 usage."})
 final class AuditCommand implements Callable<Integer> {
     @Mixin CommonOptions common;
     @Mixin ModelOptions model;
@@ -69,6 +71,10 @@ final class AuditCommand implements Callable<Integer> {
     long seed;
     @Option(names = "--sarif", paramLabel = "FILE", description = "Also write the findings as a SARIF 2.1.0 log for code-scanning views (docs/ci.md); replaced only with --force.")
     Path sarif;
+    @Option(names = "--baseline", paramLabel = "FILE", description = "An earlier audit.json: each finding is reported new, unchanged or resolved against it, and --fail-on counts new findings only (docs/ci.md).")
+    Path baseline;
+    @Option(names = "--fail-on-all", description = "With --baseline, let --fail-on count every open finding, not only new ones.")
+    boolean failOnAll;
 
     @Override
     public Integer call() throws IOException {
@@ -86,6 +92,10 @@ final class AuditCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());
         }
+        if (failOnAll && baseline == null) {
+            throw new UsageException("--fail-on-all is read only with --baseline");
+        }
+        Baseline earlier = baseline == null ? null : BaselineJson.read(baseline);
         Policy rules = policy == null ? Policy.empty() : Policy.read(policy);
         if (sarif != null) {
             SarifWriter.refuseToReplace(sarif, force || resume);
@@ -114,15 +124,20 @@ final class AuditCommand implements Callable<Integer> {
         List<String> files = new ArrayList<>();
         files.add(folder.write(OutputFolder.EXPLANATIONS, outcome.explanations().stream()
                 .map(ExplanationsJson::toLine).collect(Collectors.joining("\n", "", "\n"))).toString());
-        files.add(folder.write(OutputFolder.AUDIT, AuditJson.toJson(outcome.result()) + "\n").toString());
-        files.add(folder.write(OutputFolder.REPORT, HtmlReports.audit(outcome.result(), outcome.explanations())).toString());
-        files.add(folder.file(OutputFolder.JOURNAL).toString());
         AuditResult result = outcome.result();
+        Baseline.Comparison since = earlier == null ? null : earlier.compare(Baseline.entriesOf(result));
+        files.add(folder.write(OutputFolder.AUDIT, AuditJson.toJson(result, since) + "\n").toString());
+        files.add(folder.write(OutputFolder.REPORT, HtmlReports.audit(result, outcome.explanations(), since)).toString());
+        files.add(folder.file(OutputFolder.JOURNAL).toString());
         if (sarif != null) {
-            files.add(SarifOutput.write(result, sarif, true, corpus.path(), corpus::open).toString());
+            files.add(SarifOutput.write(result, sarif, true, corpus.path(), corpus::open, since).toString());
         }
-        AuditPrinter.print(spec.commandLine().getOut(), result, files, concurrency);
-        return gate != null && !result.open(gate).isEmpty() ? ExitCodes.GATE : ExitCodes.OK;
+        AuditPrinter.print(spec.commandLine().getOut(), result, files, concurrency, since);
+        if (gate == null) {
+            return ExitCodes.OK;
+        }
+        boolean failing = since == null || failOnAll ? !result.open(gate).isEmpty() : !since.gate(gate).isEmpty();
+        return failing ? ExitCodes.GATE : ExitCodes.OK;
     }
 
     private static Severity severity(String level) {

@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
 import org.telltale.audit.AuditResult;
+import org.telltale.audit.Baseline;
 import org.telltale.audit.AuditResult.Finding;
 import org.telltale.audit.AuditResult.Scrub;
 
@@ -21,6 +22,11 @@ final class AuditPrinter {
 
     /** {@code concurrency}: the connector's account of its requests in flight (e.g. where auto settled), or "". */
     static void print(PrintWriter out, AuditResult result, List<String> files, String concurrency) {
+        print(out, result, files, concurrency, null);
+    }
+
+    /** {@code since}: the comparison with a baseline, or {@code null}. */
+    static void print(PrintWriter out, AuditResult result, List<String> files, String concurrency, Baseline.Comparison since) {
         AuditResult.Summary s = result.summary();
         out.printf(Locale.ROOT, "audited %d documents, explained %d; labels %s%s%n", s.documents(), s.explained(),
                 String.join(", ", s.labels()),
@@ -47,6 +53,9 @@ final class AuditPrinter {
                 out.printf(Locale.ROOT, "  … and %d more in audit.json%n", findings.size() - TOP);
             }
         }
+        if (since != null) {
+            printBaseline(out, since);
+        }
         if (!result.scrub().isEmpty()) {
             out.printf(Locale.ROOT, "%nscrub test (%s documents):%n", result.scrub().get(0).scope());
             out.printf(Locale.ROOT, "  %-11s %-6s %9s %9s %10s %9s %9s%n", "kind", "mode", "documents", "flip rate",
@@ -63,6 +72,23 @@ final class AuditPrinter {
             out.println("wrote " + file);
         }
         out.flush();
+    }
+
+    /** The "since the baseline" section: counts, then every new and resolved finding (unchanged ones are counted only). */
+    static void printBaseline(PrintWriter out, Baseline.Comparison since) {
+        out.printf(Locale.ROOT, "%nsince the baseline %s: %d new, %d unchanged, %d resolved%n", since.baseline(),
+                since.added().size(), since.unchanged().size(), since.resolved().size());
+        for (Baseline.Entry e : since.added()) {
+            out.println("  " + line(Baseline.State.NEW, e));
+        }
+        for (Baseline.Entry e : since.resolved()) {
+            out.println("  " + line(Baseline.State.RESOLVED, e));
+        }
+    }
+
+    private static String line(Baseline.State state, Baseline.Entry e) {
+        return String.format(Locale.ROOT, "%-9s %-8s %-11s %-24s %s%s", state.key(), e.severity().key(), e.identity().kind(),
+                clip(e.identity().pattern(), 24), clip(e.identity().label(), 12), e.suppressed() ? " (suppressed)" : "");
     }
 
     private static String share(Double value) {

@@ -5,6 +5,8 @@ import java.util.concurrent.Callable;
 import org.telltale.ExitCodes;
 import org.telltale.UsageException;
 import org.telltale.audit.AuditResult;
+import org.telltale.audit.Baseline;
+import org.telltale.report.json.BaselineJson;
 import org.telltale.report.html.HtmlReports;
 import org.telltale.report.html.ReportSources;
 import org.telltale.report.sarif.SarifWriter;
@@ -47,6 +49,11 @@ final class ReportCommand implements Callable<Integer> {
     @Mixin
     CorpusOptions corpus;
 
+    @Option(names = "--baseline", paramLabel = "FILE",
+            description = "An earlier audit.json: the report and the SARIF log show each finding of --from as new, "
+                    + "unchanged or resolved against it (docs/ci.md). Without it, a comparison stored in --from is shown.")
+    Path baseline;
+
     @Option(names = "--force", description = "Replace existing output files.")
     boolean force;
 
@@ -61,14 +68,19 @@ final class ReportCommand implements Callable<Integer> {
         if (out != null) {
             HtmlReports.refuseToReplace(out, force);
         }
+        Baseline.Comparison since = null;
+        if (baseline != null) {
+            since = BaselineJson.read(baseline).compare(Baseline.entriesOf(ReportSources.readAudit(from)));
+        }
         if (sarif != null) {
             SarifWriter.refuseToReplace(sarif, force);
             AuditResult audit = ReportSources.readAudit(from);
             Path corpusPath = corpus.given() ? corpus.path() : Path.of(audit.summary().corpus());
-            SarifOutput.write(audit, sarif, force, corpusPath, corpus.given() ? corpus::open : null);
+            Baseline.Comparison stored = since != null ? since : BaselineJson.section(from).orElse(null);
+            SarifOutput.write(audit, sarif, force, corpusPath, corpus.given() ? corpus::open : null, stored);
         }
         if (out != null) {
-            ReportSources.Rendered rendered = ReportSources.render(from);
+            ReportSources.Rendered rendered = ReportSources.render(from, since);
             HtmlReports.write(rendered.html(), out, force);
             if (rendered.note() != null) {
                 spec.commandLine().getErr().println("telltale: " + rendered.note());

@@ -6,6 +6,7 @@ import java.util.Map;
 import java.util.Set;
 import java.util.function.Supplier;
 import org.telltale.audit.AuditResult;
+import org.telltale.audit.Baseline;
 import org.telltale.report.sarif.AuditSarif;
 import org.telltale.report.sarif.SarifLog;
 import org.telltale.report.sarif.SarifWriter;
@@ -23,6 +24,12 @@ final class SarifOutput {
      *                   when it is not at hand (the locations then name the file alone)
      */
     static Path write(AuditResult audit, Path file, boolean force, Path corpusPath, Supplier<CorpusReader> corpus) {
+        return write(audit, file, force, corpusPath, corpus, null);
+    }
+
+    /** As above, each result with its state against a baseline ({@code since}; {@code null}: none). */
+    static Path write(AuditResult audit, Path file, boolean force, Path corpusPath, Supplier<CorpusReader> corpus,
+            Baseline.Comparison since) {
         String corpusUri = SarifWriter.uri(corpusPath);
         Map<String, SarifLog.Location> places = new HashMap<>();
         if (corpus != null) {
@@ -32,7 +39,7 @@ final class SarifOutput {
                         new SarifLog.Location(SarifWriter.uri(place.file()), place.line(), id)));
             }
         }
-        SarifWriter.write(AuditSarif.of(audit, VersionProvider.version(), corpusUri, places), file, force);
+        SarifWriter.write(AuditSarif.of(audit, VersionProvider.version(), corpusUri, places, since), file, force);
         return file;
     }
 }

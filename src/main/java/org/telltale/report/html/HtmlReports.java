@@ -16,6 +16,7 @@ import java.util.Map;
 import java.util.Properties;
 import org.telltale.TelltaleException;
 import org.telltale.audit.AuditResult;
+import org.telltale.audit.Baseline;
 import org.telltale.explain.Explanation;
 
 /**
@@ -56,9 +57,18 @@ public final class HtmlReports {
      *                     the evidence are looked up here by document id
      */
     public static String audit(AuditResult audit, List<Explanation> explanations) {
+        return audit(audit, explanations, null);
+    }
+
+    /** The audit report with a "Since the baseline" section for {@code since} ({@code null}: none). */
+    public static String audit(AuditResult audit, List<Explanation> explanations, Baseline.Comparison since) {
         AuditView view = AuditViews.of(audit, explanations);
         String subtitle = audit.summary().documents() + " documents · " + audit.summary().explained() + " explained";
-        return render("audit.jte", Map.of("page", page("Audit", "Telltale audit", subtitle), "a", view));
+        Map<String, Object> params = new java.util.HashMap<>();
+        params.put("page", page("Audit", "Telltale audit", subtitle));
+        params.put("a", view);
+        params.put("since", BaselineView.of(since));
+        return render("audit.jte", params);
     }
 
     /**

@@ -10,8 +10,10 @@ import java.nio.file.Path;
 import java.util.List;
 import org.telltale.TelltaleException;
 import org.telltale.audit.AuditResult;
+import org.telltale.audit.Baseline;
 import org.telltale.explain.Explanation;
 import org.telltale.report.json.AuditJson;
+import org.telltale.report.json.BaselineJson;
 import org.telltale.report.json.ExplanationsJson;
 
 /**
@@ -33,18 +35,27 @@ public final class ReportSources {
     }
 
     public static Rendered render(Path from) {
+        return render(from, null);
+    }
+
+    /**
+     * As {@link #render(Path)}; an audit is shown against {@code since} when given, else against
+     * the comparison its audit.json carries (an audit run with {@code --baseline}), if any.
+     */
+    public static Rendered render(Path from, Baseline.Comparison since) {
         if (!Files.isRegularFile(from)) {
             throw new TelltaleException(from + ": no such file");
         }
         String format = formatOf(from);
         if (AuditJson.FORMAT.equals(format)) {
             AuditResult audit = readAudit(from);
+            Baseline.Comparison shown = since != null ? since : BaselineJson.section(from).orElse(null);
             Path sibling = from.resolveSibling(AUDIT_EXPLANATIONS);
             if (!Files.isRegularFile(sibling)) {
-                return new Rendered(HtmlReports.audit(audit, List.of()), "audit",
+                return new Rendered(HtmlReports.audit(audit, List.of(), shown), "audit",
                         "no " + AUDIT_EXPLANATIONS + " beside " + from + ": the report has no document views or contexts");
             }
-            return new Rendered(HtmlReports.audit(audit, ExplanationsJson.read(sibling)), "audit", null);
+            return new Rendered(HtmlReports.audit(audit, ExplanationsJson.read(sibling), shown), "audit", null);
         }
         if (format == null || ExplanationsJson.FORMAT.equals(format)) {
             List<Explanation> explanations = ExplanationsJson.read(from);

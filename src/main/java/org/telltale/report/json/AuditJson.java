@@ -60,8 +60,17 @@ public final class AuditJson {
 
     /** The JSON text of {@code result}, indented. */
     public static String toJson(AuditResult result) {
+        return toJson(result, null);
+    }
+
+    /** The JSON text of {@code result} with its comparison to a baseline ({@code null}: none), indented. */
+    public static String toJson(AuditResult result, org.telltale.audit.Baseline.Comparison since) {
         try {
-            return MAPPER.writeValueAsString(tree(result));
+            ObjectNode root = tree(result);
+            if (since != null) {
+                root.set(BaselineJson.SECTION, BaselineJson.tree(since));
+            }
+            return MAPPER.writeValueAsString(root);
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("a JSON tree failed to serialise", e);
         }

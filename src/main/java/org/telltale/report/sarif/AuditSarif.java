@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.telltale.audit.ArtefactIdentity;
+import org.telltale.audit.Baseline;
 import org.telltale.audit.ArtefactKind;
 import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditResult.Finding;
@@ -39,15 +40,42 @@ public final class AuditSarif {
      *                  the corpus file as a whole
      */
     public static SarifLog of(AuditResult audit, String version, String corpusUri, Map<String, Location> places) {
+        return of(audit, version, corpusUri, places, null);
+    }
+
+    /**
+     * As above, each result carrying its {@code baselineState} against {@code since} (§3.27.24:
+     * {@code new} or {@code unchanged}; {@code null}: no baseline). Resolved artefacts are not
+     * results, since viewers would show them as open; the run's property bag lists them.
+     */
+    public static SarifLog of(AuditResult audit, String version, String corpusUri, Map<String, Location> places,
+            Baseline.Comparison since) {
         Set<ArtefactKind> kinds = EnumSet.noneOf(ArtefactKind.class);
         audit.findings().forEach(f -> kinds.add(f.kind()));
         List<Rule> rules = kinds.stream().map(SarifRules::of).toList();
         List<Result> results = new ArrayList<>();
         for (Finding f : audit.findings()) {
-            results.add(result(f, corpusUri, places));
+            results.add(result(f, corpusUri, places, since));
         }
         String corpus = audit.summary().corpus();
-        return new SarifLog(new SarifLog.Tool("Telltale", version, null), rules, results, settings(audit.summary()),
+        Map<String, Object> settings = settings(audit.summary());
+        if (since != null) {
+            settings = new LinkedHashMap<>(settings);
+            Map<String, Object> baseline = new LinkedHashMap<>();
+            baseline.put("file", since.baseline());
+            baseline.put("new", since.added().size());
+            baseline.put("unchanged", since.unchanged().size());
+            baseline.put("resolved", since.resolved().stream().map(e -> {
+                Map<String, Object> r = new LinkedHashMap<>();
+                r.put("identity", e.identity().fingerprint());
+                r.put("kind", e.identity().kind());
+                r.put("label", e.identity().label());
+                r.put("pattern", e.identity().pattern());
+                return r;
+            }).toList());
+            settings.put("baseline", baseline);
+        }
+        return new SarifLog(new SarifLog.Tool("Telltale", version, null), rules, results, settings,
                 "telltale-audit/" + corpus + "/");
     }
 
@@ -69,7 +97,7 @@ public final class AuditSarif {
         };
     }
 
-    private static Result result(Finding f, String corpusUri, Map<String, Location> places) {
+    private static Result result(Finding f, String corpusUri, Map<String, Location> places, Baseline.Comparison since) {
         ArtefactIdentity identity = ArtefactIdentity.of(f);
         List<Location> locations = new ArrayList<>();
         f.examples().stream().limit(EXAMPLES).forEach(x ->
@@ -95,7 +123,15 @@ public final class AuditSarif {
         }
         SarifLog.Suppression suppression = f.suppressed() ? new SarifLog.Suppression(f.policyNote()) : null;
         return new Result(SarifRules.id(f.kind()), level(f.severity()), message(f),
-                Map.of(SarifWriter.IDENTITY_KEY, identity.fingerprint()), locations, suppression, null, props);
+                Map.of(SarifWriter.IDENTITY_KEY, identity.fingerprint()), locations, suppression, baselineState(since, identity),
+                props);
+    }
+
+    private static SarifLog.BaselineState baselineState(Baseline.Comparison since, ArtefactIdentity identity) {
+        if (since == null) {
+            return null;
+        }
+        return since.stateOf(identity) == Baseline.State.NEW ? SarifLog.BaselineState.NEW : SarifLog.BaselineState.UNCHANGED;
     }
 
     static String message(Finding f) {

@@ -58,6 +58,19 @@ class ReportAccessibilityBrowserTest {
     }
 
     @Test
+    void theAuditReportComparedWithABaselinePassesEveryWcagRule() throws Exception {
+        SampleAudit.Audit audit = SampleAudit.of(120, 7);
+        List<org.telltale.audit.Baseline.Entry> entries = org.telltale.audit.Baseline.entriesOf(audit.result());
+        org.telltale.audit.Baseline.Comparison since = new org.telltale.audit.Baseline("old/audit.json",
+                entries.subList(1, entries.size())).compare(entries.subList(0, entries.size() - 1));
+        Path file = dir.resolve("audit-baseline.html");
+        HtmlReports.write(HtmlReports.audit(audit.result(), audit.explanations(), since), file, true);
+        chromium.open(file);
+        assertTrue(chromium.driver.findElement(By.id("baseline-h")).isDisplayed());
+        assertNoViolations("the audit report's baseline section");
+    }
+
+    @Test
     void theOverlapReportPassesEveryWcagRule() throws Exception {
         Path file = dir.resolve("overlap.html");
         HtmlReports.write(OverlapReport.render(OverlapReportTest.sample()), file, true);
