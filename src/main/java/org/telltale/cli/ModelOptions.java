@@ -26,7 +26,8 @@ public final class ModelOptions {
 
     @Option(names = "--protocol", paramLabel = "NAME", defaultValue = "native", converter = ProtocolConverter.class,
             description = "For URLs: native (our scoring protocol), open-inference (SPEC is …/v2/models/NAME) "
-                    + "or instances ({\"instances\"} → {\"predictions\"}). Default: ${DEFAULT-VALUE}.")
+                    + "instances ({\"instances\"} → {\"predictions\"}) or pipeline ({\"inputs\"} → per text a list of "
+                    + "{\"label\", \"score\"}). Default: ${DEFAULT-VALUE}.")
     Protocol protocol;
 
     @Option(names = "--batch", paramLabel = "N", defaultValue = "64",

@@ -57,6 +57,7 @@ public final class Connectors {
             case NATIVE -> HttpScorer.nativeFormat(url);
             case OPEN_INFERENCE -> new OpenInferenceCodec(checkModelUrl(url), settings.labels());
             case INSTANCES -> new InstancesCodec(url, settings.labels());
+            case PIPELINE -> new PipelineCodec(url);
         };
         String where = Endpoints.safe(url);
         List<String> notes = new ArrayList<>();

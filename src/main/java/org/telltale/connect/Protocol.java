@@ -9,20 +9,22 @@ public enum Protocol {
     /** Open Inference Protocol v2: a BYTES input tensor of texts, an FP32 output tensor [n, labels]. */
     OPEN_INFERENCE,
     /** The common {@code {"instances": […]}} → {@code {"predictions": […]}} shape. */
-    INSTANCES;
+    INSTANCES,
+    /** The text-classification pipeline shape: {@code {"inputs": […]}} → per text a list of {@code {"label", "score"}}. */
+    PIPELINE;
 
     /** The name used on the command line and in docs, e.g. {@code open-inference}. */
     public String cliName() {
         return name().toLowerCase(Locale.ROOT).replace('_', '-');
     }
 
-    /** Parses {@code native}, {@code open-inference} or {@code instances}, ignoring case. */
+    /** Parses {@code native}, {@code open-inference}, {@code instances} or {@code pipeline}, ignoring case. */
     public static Protocol byName(String name) {
         for (Protocol p : values()) {
             if (p.cliName().equalsIgnoreCase(name.strip())) {
                 return p;
             }
         }
-        throw new IllegalArgumentException("unknown protocol '" + name + "' (expected native, open-inference or instances)");
+        throw new IllegalArgumentException("unknown protocol '" + name + "' (expected native, open-inference, instances or pipeline)");
     }
 }

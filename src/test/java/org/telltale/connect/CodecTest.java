@@ -73,6 +73,35 @@ class CodecTest {
                 .startsWith("prediction 1 has label 'eggs'"));
     }
 
+    @Test
+    void pipelineListsAreReorderedToTheFirstTextsLabels() {
+        // Lists sorted by score, as the text-classification pipeline answers with every label's score.
+        RawScores r = PipelineCodec.parse(b("[[{\"label\":\"spam\",\"score\":0.8},{\"label\":\"ham\",\"score\":0.2}],"
+                + "[{\"label\":\"ham\",\"score\":0.6},{\"label\":\"spam\",\"score\":0.4}]]"));
+        assertEquals(List.of("spam", "ham"), r.labels());
+        assertArrayEquals(new double[] {0.8, 0.2}, r.rows()[0]);
+        assertArrayEquals(new double[] {0.4, 0.6}, r.rows()[1]);
+        RawScores wrapped = PipelineCodec.parse(b("{\"predictions\":[[{\"label\":\"a\",\"score\":1}]]}"));
+        assertEquals(List.of("a"), wrapped.labels());
+    }
+
+    @Test
+    void pipelineAnswersThatDoNotScoreEveryLabelAreClearErrors() {
+        String two = "[{\"label\":\"spam\",\"score\":0.8},{\"label\":\"ham\",\"score\":0.2}]";
+        assertTrue(msg(() -> PipelineCodec.parse(b("[" + two + ",[{\"label\":\"spam\",\"score\":1}]]")))
+                .startsWith("text 1 has 1 labels, text 0 has 2 [spam, ham]"));
+        assertTrue(msg(() -> PipelineCodec.parse(b("[" + two + ",[{\"label\":\"eggs\",\"score\":1},{\"label\":\"ham\",\"score\":0}]]")))
+                .startsWith("text 1 scores label 'eggs' that text 0 lacks"));
+        assertTrue(msg(() -> PipelineCodec.parse(b("[" + two + ",[{\"label\":\"ham\",\"score\":1},{\"label\":\"ham\",\"score\":0}]]")))
+                .startsWith("text 1 scores label 'ham' twice"));
+        // A top label alone (the pipeline's default without every score) is not enough to explain.
+        assertTrue(msg(() -> PipelineCodec.parse(b("[{\"label\":\"spam\",\"score\":0.8}]")))
+                .startsWith("the answer for text 0 is not a non-empty list"));
+        assertTrue(msg(() -> PipelineCodec.parse(b("[[{\"label\":\"spam\",\"score\":\"high\"}]]")))
+                .startsWith("text 0 scores label 'spam' with \"high\", not a number"));
+        assertTrue(msg(() -> PipelineCodec.parse(b("{\"error\":\"model says no\"}"))).startsWith("the model answered an error"));
+    }
+
     private static String msg(Runnable r) {
         return assertThrows(MalformedResponse.class, r::run).getMessage();
     }

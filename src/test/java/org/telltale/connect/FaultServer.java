@@ -75,6 +75,7 @@ final class FaultServer implements AutoCloseable {
             case NATIVE -> base + "/score";
             case OPEN_INFERENCE -> base + "/v2/models/lengths";
             case INSTANCES -> base + "/predict";
+            case PIPELINE -> base + "/classify";
         };
     }
 
@@ -202,6 +203,7 @@ final class FaultServer implements AutoCloseable {
             case NATIVE -> root.get("texts");
             case OPEN_INFERENCE -> root.get("inputs").get(0).get("data");
             case INSTANCES -> root.get("instances");
+            case PIPELINE -> root.get("inputs");
         };
         List<String> out = new ArrayList<>();
         array.forEach(t -> out.add(t.textValue()));
@@ -244,6 +246,18 @@ final class FaultServer implements AutoCloseable {
                             .append(",\"").append(labels.get(1)).append("\":").append(num(rows.get(i)[1])).append('}');
                 }
                 sb.append("]}");
+            }
+            case PIPELINE -> {
+                // Per text, the labels sorted by score as pipelines answer: the order changes from text to text.
+                sb.append('[');
+                for (int i = 0; i < rows.size(); i++) {
+                    double[] r = rows.get(i);
+                    int first = r[1] > r[0] ? 1 : 0;
+                    sb.append(i == 0 ? "" : ",").append("[{\"label\":\"").append(labels.get(first)).append("\",\"score\":")
+                            .append(num(r[first])).append("},{\"label\":\"").append(labels.get(1 - first))
+                            .append("\",\"score\":").append(num(r[1 - first])).append("}]");
+                }
+                sb.append(']');
             }
         }
         return sb.toString();

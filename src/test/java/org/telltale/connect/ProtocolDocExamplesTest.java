@@ -53,6 +53,31 @@ class ProtocolDocExamplesTest {
     void theDocPrintsTheExamplesVerbatim() throws Exception {
         assertEquals(resource("keyword_model.py"), exampleInDoc("keyword_model.py"));
         assertEquals(resource("keyword_model_lines.py"), exampleInDoc("keyword_model_lines.py"));
+        assertEquals(resource("feedback_pipeline.py"), exampleInDoc("feedback_pipeline.py"));
+    }
+
+    @Test
+    void thePipelineExampleServesThePipelineProtocol() throws Exception {
+        Path script = Python.script("/org/telltale/connect/feedback_pipeline.py", dir);
+        Process p = new ProcessBuilder(Python.python3(), script.toString(), "0").redirectError(ProcessBuilder.Redirect.DISCARD).start();
+        try {
+            String line = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8)).readLine();
+            assertTrue(line != null && line.startsWith("listening on http://127.0.0.1:"), "python printed: " + line);
+            String url = line.substring("listening on ".length()) + "/classify";
+            List<String> texts = List.of("the 9:40 was late again", "thank you, crew", "timetable?", "thanks despite the delay");
+            try (TextClassifier c = Connectors.open(ConnectorSettings.of(url).withProtocol(Protocol.PIPELINE).withBatch(3))) {
+                ScoreMatrix m = c.score(texts);
+                // The first text's list, highest score first, fixes the order; later texts are reordered to it.
+                assertEquals(List.of("other", "delay", "praise"), m.labels());
+                assertArrayEquals(new double[] {1.0 / 1.8, 0.7 / 1.8, 0.1 / 1.8}, m.row(0), 1e-12);
+                assertArrayEquals(new double[] {1.0 / 1.7, 0.1 / 1.7, 0.6 / 1.7}, m.row(1), 1e-12);
+                assertArrayEquals(new double[] {1.0 / 1.2, 0.1 / 1.2, 0.1 / 1.2}, m.row(2), 1e-12);
+                assertArrayEquals(new double[] {1.0 / 2.3, 0.7 / 2.3, 0.6 / 2.3}, m.row(3), 1e-12);
+            }
+        } finally {
+            p.destroyForcibly();
+            p.waitFor(10, TimeUnit.SECONDS);
+        }
     }
 
     @Test

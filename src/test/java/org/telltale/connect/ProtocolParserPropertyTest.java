@@ -17,7 +17,8 @@ class ProtocolParserPropertyTest {
             "{\"labels\":[\"a\",\"b\"],\"scores\":[[0.1,0.9],[0.5,0.5]]}",
             "{\"outputs\":[{\"name\":\"s\",\"datatype\":\"FP32\",\"shape\":[2,2],\"data\":[0.1,0.9,0.5,0.5]}]}",
             "{\"name\":\"m\",\"inputs\":[{\"name\":\"t\"}],\"outputs\":[{\"parameters\":{\"labels\":[\"a\",\"b\"]}}]}",
-            "{\"predictions\":[{\"a\":0.1,\"b\":0.9},[0.5,0.5]]}");
+            "{\"predictions\":[{\"a\":0.1,\"b\":0.9},[0.5,0.5]]}",
+            "[[{\"label\":\"a\",\"score\":0.9},{\"label\":\"b\",\"score\":0.1}],[{\"label\":\"b\",\"score\":0.6},{\"label\":\"a\",\"score\":0.4}]]");
 
     private static void parseAll(byte[] body) {
         check(() -> NativeCodec.parse(body));
@@ -25,6 +26,7 @@ class ProtocolParserPropertyTest {
         check(() -> OpenInferenceCodec.parseInfer(body, 2, List.of()));
         check(() -> OpenInferenceCodec.parseMetadata(body, List.of()));
         check(() -> InstancesCodec.parse(body, List.of()));
+        check(() -> PipelineCodec.parse(body));
     }
 
     private static void check(Runnable parse) {
