@@ -53,9 +53,18 @@ public record Baseline(String source, List<Entry> entries) {
         public static Entry of(AuditResult.Finding finding) {
             return new Entry(ArtefactIdentity.of(finding), finding.severity(), finding.suppressed());
         }
+
+        /** An artefact of an audit, by its kind, label and pattern. */
+        public static Entry of(AuditResult.Artefact artefact) {
+            return new Entry(artefact.identity(), artefact.severity(), artefact.suppressed());
+        }
     }
 
-    /** The artefacts of {@code audit}, in its order. */
+    /**
+     * The artefacts of {@code audit}, in its order: its findings, which the {@code telltale.audit}
+     * version 1 contract reports (when audit.json carries artefacts, they take the findings' place
+     * here, through {@link Entry#of(AuditResult.Artefact)}).
+     */
     public static List<Entry> entriesOf(AuditResult audit) {
         return audit.findings().stream().map(Entry::of).toList();
     }

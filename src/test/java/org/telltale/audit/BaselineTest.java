@@ -60,6 +60,17 @@ class BaselineTest {
     }
 
     @Test
+    void aReportedArtefactIsMatchedByItsKindLabelAndNormalisedPattern() {
+        AuditResult.Artefact footer = new AuditResult.Artefact("a1", ArtefactKind.BOILERPLATE, Severity.MEDIUM, "meter",
+                "Sent via the Fernhill app", 90, 1.2, 9.0, 0.95, true, false, null, null, java.util.List.of(),
+                AuditResult.Effect.NONE, java.util.List.of());
+        Baseline.Entry entry = Baseline.Entry.of(footer);
+        assertEquals(FOOTER.identity(), entry.identity());
+        assertEquals(Severity.MEDIUM, entry.severity());
+        assertEquals(List.of(entry), new Baseline("old", List.of(FOOTER)).compare(List.of(entry)).unchanged());
+    }
+
+    @Test
     void anArtefactInNeitherAuditHasNoState() {
         Baseline.Comparison c = new Baseline("old", List.of()).compare(List.of());
         assertThrows(IllegalArgumentException.class, () -> c.stateOf(HEADER.identity()));
