@@ -17,6 +17,7 @@ import org.telltale.UsageException;
 import org.telltale.explain.ExplainSettings;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
+import org.telltale.explain.Sampling;
 import org.telltale.explain.Selection;
 import org.telltale.explain.Target;
 import org.telltale.explain.Weighting;
@@ -75,6 +76,11 @@ final class ExplainCommand implements Callable<Integer> {
     @Option(names = "--bandwidth", paramLabel = "X", defaultValue = "" + ExplainSettings.DEFAULT_BANDWIDTH,
             description = "Sigma of the cosine kernel (default: ${DEFAULT-VALUE}; see docs/method.md).")
     double bandwidth;
+    @Option(names = "--sampling", paramLabel = "HOW", defaultValue = "kernel",
+            description = "How many units a probe removes: kernel (drawn in proportion to the kernel's weight, every probe"
+                    + " weighted alike) or uniform (uniform in 1..d, each probe weighted by the kernel)"
+                    + " (default: ${DEFAULT-VALUE}; see docs/method.md).")
+    String sampling;
     @Option(names = "--weighting", paramLabel = "KIND", defaultValue = "cosine", description = "cosine or shapley (default: ${DEFAULT-VALUE}).")
     String weighting;
     @Option(names = "--filler", paramLabel = "TEXT", defaultValue = "", description = "Written in place of each removed unit (default: nothing).")
@@ -165,7 +171,7 @@ final class ExplainCommand implements Callable<Integer> {
         try {
             return ExplainSettings.defaults().withWords(k).withProbes(budget).withUnit(UnitKind.fromKey(unit))
                     .withSelect(Selection.fromKey(select)).withTarget(Target.fromKey(target)).withBandwidth(bandwidth)
-                    .withWeighting(Weighting.fromKey(weighting)).withAnalyzer(analyzer.spec()).withSeed(seed)
+                    .withWeighting(Weighting.fromKey(weighting)).withSampling(Sampling.fromKey(sampling)).withAnalyzer(analyzer.spec()).withSeed(seed)
                     .withFiller(filler).withSplitHalf(splitHalf);
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());

@@ -87,10 +87,13 @@ public record ExplainSettings(
         }
     }
 
-    /** Ten words, 2,000 probes, word units, forward selection, σ = 0.25, cosine kernel, seed 1. */
+    /**
+     * Ten words, 2,000 probes, word units, forward selection, σ = 0.25, cosine kernel with the
+     * removed count sampled to match it, seed 1.
+     */
     public static ExplainSettings defaults() {
         return new ExplainSettings(10, DEFAULT_PROBES, 4000, UnitKind.WORD, Selection.FORWARD, DEFAULT_BANDWIDTH,
-                Weighting.COSINE, "standard", 1L, "", 1.0, 0.95, Target.AUTO, Sampling.UNIFORM, false,
+                Weighting.COSINE, "standard", 1L, "", 1.0, 0.95, Target.AUTO, Sampling.KERNEL, false,
                 DEFAULT_MAX_UNITS);
     }
 

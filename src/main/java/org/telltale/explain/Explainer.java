@@ -107,14 +107,16 @@ public final class Explainer {
         } else {
             SurrogateFit.Design design = fitter.design(d, probes.rows(),
                     TargetValues.column(probes, labelColumn, target), false, draws);
-            Separation.Verdict verdict = verdict(design, k, resolution);
+            int[] next = selectBeyond(design, k);
+            Separation.Verdict verdict = verdict(design, next, k, resolution);
             while (settings.adaptive() && !verdict.settled() && probes.size() < settings.probeCap()) {
                 int n = probes.size();
                 double wanted = Double.isFinite(verdict.probesNeeded()) ? 1.1 * verdict.probesNeeded() : 2.0 * n;
-                int next = (int) Math.min(settings.probeCap(), Math.max(n + FIRST_ROUND, Math.min(4.0 * n, wanted)));
-                probes.add(ProbeSampler.draw(d, next - n, counts, sampling));
+                int grown = (int) Math.min(settings.probeCap(), Math.max(n + FIRST_ROUND, Math.min(4.0 * n, wanted)));
+                probes.add(ProbeSampler.draw(d, grown - n, counts, sampling));
                 design = fitter.design(d, probes.rows(), TargetValues.column(probes, labelColumn, target), false, draws);
-                verdict = verdict(design, k, resolution);
+                next = selectBeyond(design, k);
+                verdict = verdict(design, next, k, resolution);
             }
             toGo = verdict.settled() ? 0 : Double.isFinite(verdict.probesNeeded())
                     ? (int) Math.min(Integer.MAX_VALUE, Math.ceil(verdict.probesNeeded() - probes.size())) : -1;
@@ -124,7 +126,11 @@ public final class Explainer {
                         settings.probeCap(), toGo > 0 ? String.format(java.util.Locale.ROOT,
                                 " (about %d more probes would be needed)", toGo) : ""));
             }
-            surrogate = fitter.fitUnits(design, fitter.select(design, k));
+            // Forward selection is greedy, so its first K of K + 1 are its choice of K; the lasso
+            // path may drop a unit on the way to K + 1, so it is run again for K.
+            int[] reported = settings.select() == Selection.FORWARD
+                    ? java.util.Arrays.copyOf(next, Math.min(k, next.length)) : fitter.select(design, k);
+            surrogate = fitter.fitUnits(design, reported);
             if (settings.splitHalf()) {
                 stability = stability(d, probes, TargetValues.column(probes, labelColumn, target), fixed.size());
             }
@@ -171,9 +177,13 @@ public final class Explainer {
     static final double PROBABILITY_RESOLUTION = 0.005;
     static final double LOG_ODDS_RESOLUTION = 0.05;
 
+    /** The K units the selection reports and the one it would add next (every unit when K ≥ d). */
+    private int[] selectBeyond(SurrogateFit.Design design, int k) {
+        return fitter.select(design, k >= design.d ? k : k + 1);
+    }
+
     /** Whether the K reported units stand apart from the next one: one fit on K + 1 units. */
-    private Separation.Verdict verdict(SurrogateFit.Design design, int k, double resolution) {
-        int[] chosen = fitter.select(design, k >= design.d ? k : k + 1);
+    private Separation.Verdict verdict(SurrogateFit.Design design, int[] chosen, int k, double resolution) {
         int reported = Math.min(k, chosen.length);
         Surrogate fit = fitter.fitUnits(design, chosen);
         return Separation.of(fit, reported, fitter.z(), resolution, design.rows());

@@ -29,15 +29,24 @@ import org.telltale.text.Document;
  * The models are planted, not fitted: the sparse logistic model has weights on the 30 signal words
  * only (so a document's gold set is its signal words, at most 10); the tree is a random complete
  * tree of depth 6 testing signal-word presence (gold set: the path's words present in the
- * document, at most 6 — removal can only reveal words that are there).
+ * document, at most 6 — removal can only reveal words that are there). {@link HardBench} is the
+ * harder variant ({@code bench/faithfulness.sh 100 SEED hard}).
  */
 public final class FaithfulnessBench {
     static final int[] BUDGETS = {250, 500, 1000, 2000, 5000};
     static final int K = 10;
 
-    public static void main(String[] args) {
+    public static void main(String[] args) throws Exception {
         int documents = args.length > 0 ? Integer.parseInt(args[0]) : 100;
         long seed = args.length > 1 ? Long.parseLong(args[1]) : 20261201L;
+        String mode = args.length > 2 ? args[2] : "easy";
+        if (mode.equals("hard")) {
+            HardBench.run(documents, seed, args.length > 3 ? args[3] : HardBench.DEFAULT_VARIANTS);
+            return;
+        }
+        if (!mode.equals("easy")) {
+            throw new IllegalArgumentException("mode must be easy or hard: " + mode);
+        }
         Random random = new Random(seed);
         List<String> background = words(random, 1000, new HashSet<>());
         List<String> signal = words(random, 30, new HashSet<>(background));
@@ -113,7 +122,7 @@ public final class FaithfulnessBench {
                 name, what, calls / n, BUDGETS[BUDGETS.length - 1], agreement / n, (double) atLeast / n);
     }
 
-    private static List<String> words(Random random, int count, Set<String> taken) {
+    static List<String> words(Random random, int count, Set<String> taken) {
         String consonants = "bdfgklmnprstvz";
         String vowels = "aeiou";
         List<String> out = new ArrayList<>();
@@ -157,7 +166,7 @@ public final class FaithfulnessBench {
         return out;
     }
 
-    private abstract static class Planted implements TextClassifier {
+    abstract static class Planted implements TextClassifier {
         abstract double positive(Set<String> present);
 
         @Override

@@ -60,6 +60,7 @@ class ExplainCommandTest {
         assertEquals(1, back.size());
         Explanation e = back.get(0);
         assertEquals("outage", e.label());
+        assertEquals("kernel", e.method().sampling());
         assertTrue(e.terms().size() <= 3);
         assertTrue(e.method().calls() <= e.probes());
     }
@@ -76,6 +77,11 @@ class ExplainCommandTest {
         Run r = run("explain", "--model", model.toString(), "--corpus", corpus.toString(), "--first", "1", "--doc", "c",
                 "--probes", "200", "--json", json.toString());
         assertEquals(0, r.code(), r.err());
+        Run uniform = run("explain", "--model", model.toString(), "--corpus", corpus.toString(), "--first", "1",
+                "--probes", "200", "--sampling", "uniform", "--json", "-");
+        assertEquals(0, uniform.code(), uniform.err());
+        assertEquals("uniform", ExplanationsJson.read(new ByteArrayInputStream(uniform.out().getBytes(
+                StandardCharsets.UTF_8)), "stdout").get(0).method().sampling());
         List<Explanation> back = ExplanationsJson.read(json);
         assertEquals(List.of("a", "c"), back.stream().map(Explanation::id).toList());
         assertEquals("login", back.get(1).gold());
@@ -93,6 +99,9 @@ class ExplainCommandTest {
         assertEquals(2, run("explain", "--model", model.toString(), "--text", "x", "--probes", "many").code());
         assertEquals(2, run("explain", "--model", model.toString(), "--text", "x", "--select", "best").code());
         assertEquals(2, run("explain", "--model", model.toString(), "--text", "x", "--words", "0").code());
+        Run sampling = run("explain", "--model", model.toString(), "--text", "x", "--sampling", "stratified");
+        assertEquals(2, sampling.code());
+        assertTrue(sampling.err().contains("sampling must be uniform or kernel: stratified"), sampling.err());
         Run help = run("explain", "--help");
         assertEquals(0, help.code());
         assertTrue(help.out().contains("--weighting"), help.out());

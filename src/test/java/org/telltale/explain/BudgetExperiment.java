@@ -34,8 +34,8 @@ public final class BudgetExperiment {
             }
             label = null;
         } else {
-            docs = LexiconFidelityTest.reviews();
-            model = LexiconFidelityTest.afinnModel(LexiconFidelityTest.lexicon());
+            docs = LexiconCheck.reviews();
+            model = LexiconCheck.model(LexiconCheck.lexicon());
             label = "yes";
         }
         if (what.equals("all") || what.equals("bandwidth")) {

@@ -11,7 +11,8 @@ import java.util.Map;
 import java.util.Set;
 import java.util.function.ToDoubleFunction;
 import org.junit.jupiter.api.Tag;
-import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.EnumSource;
 import org.telltale.text.Analyzers;
 import org.telltale.text.Document;
 import org.telltale.text.Masker;
@@ -60,19 +61,21 @@ class IntervalCoverageTest {
         return w.contains(term) ? 1 : 0;
     }
 
-    @Test
-    void ninetyFivePercentIntervalsHoldTheConvergedWeightOnALinearModel() {
-        assertCoverage("linear", IntervalCoverageTest::linear);
+    @ParameterizedTest
+    @EnumSource(Sampling.class)
+    void ninetyFivePercentIntervalsHoldTheConvergedWeightOnALinearModel(Sampling sampling) {
+        assertCoverage("linear", IntervalCoverageTest::linear, sampling);
     }
 
-    @Test
-    void ninetyFivePercentIntervalsHoldTheConvergedWeightOnATreeModel() {
-        assertCoverage("tree", IntervalCoverageTest::tree);
+    @ParameterizedTest
+    @EnumSource(Sampling.class)
+    void ninetyFivePercentIntervalsHoldTheConvergedWeightOnATreeModel(Sampling sampling) {
+        assertCoverage("tree", IntervalCoverageTest::tree, sampling);
     }
 
-    private static void assertCoverage(String name, ToDoubleFunction<Set<String>> f) {
+    private static void assertCoverage(String name, ToDoubleFunction<Set<String>> f, Sampling sampling) {
         FunctionClassifier model = new FunctionClassifier(f);
-        ExplainSettings settings = ExplainSettings.defaults().withWords(K).withProbes(PROBES);
+        ExplainSettings settings = ExplainSettings.defaults().withWords(K).withProbes(PROBES).withSampling(sampling);
         TermIndex index = TermIndex.of(TEXT, Analyzers.standard(), UnitKind.WORD);
         int d = index.size();
         Map<String, Integer> unitOf = new HashMap<>();
@@ -83,9 +86,10 @@ class IntervalCoverageTest {
         ProbeSet converged = new ProbeSet("converged", index, Masker.cutting(), model);
         List<BitSet> rows = new ArrayList<>();
         rows.add(new BitSet());
-        rows.addAll(ProbeSampler.draw(d, CONVERGED - 1, new ProbeRandom(987654321L)));
-        converged.add(rows);
         SurrogateFit fitter = new SurrogateFit(settings);
+        double[] counts = sampling == Sampling.KERNEL ? ProbeSampler.matchedCounts(fitter.kernel(), d) : null;
+        rows.addAll(ProbeSampler.draw(d, CONVERGED - 1, counts, new ProbeRandom(987654321L)));
+        converged.add(rows);
         SurrogateFit.Design design = fitter.design(d, converged.rows(), converged.column(0), false, CONVERGED - 1);
 
         int held = 0;
@@ -105,7 +109,8 @@ class IntervalCoverageTest {
             }
         }
         double coverage = (double) held / total;
-        System.out.printf(Locale.ROOT, "interval coverage, %s model: %d of %d = %.3f%n", name, held, total, coverage);
+        System.out.printf(Locale.ROOT, "interval coverage, %s model, %s sampling: %d of %d = %.3f%n", name,
+                sampling.key(), held, total, coverage);
         assertTrue(coverage >= 0.90, name + ": the 95 % intervals held the converged weight in " + held + " of " + total);
     }
 }
