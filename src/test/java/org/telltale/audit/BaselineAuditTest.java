@@ -116,17 +116,19 @@ class BaselineAuditTest {
         String printed = stdout.toString(StandardCharsets.UTF_8);
         assertEquals(ExitCodes.GATE, code, printed);
         Baseline.Comparison since = BaselineJson.section(secondOut.resolve("audit.json")).orElseThrow();
-        // The new header alone fails the gate: its value and, in this term-level contract, its field name.
-        assertTrue(patterns(since.gate(Severity.MEDIUM)).contains(NEW_VALUE), "gate: " + since.added());
-        assertTrue(Set.of(NEW_VALUE, "dispatch", "x-dispatch").containsAll(patterns(since.gate(Severity.MEDIUM))), "gate: " + since.added());
-        assertTrue(since.added().stream().anyMatch(e -> e.identity().equals(new ArtefactIdentity("header", "outage", NEW_VALUE))));
+        // The new header alone fails the gate (at the term level: its value and its field name).
+        List<Baseline.Entry> gate = since.gate(Severity.MEDIUM);
+        assertTrue(gate.stream().anyMatch(e -> e.identity().kind().equals("header") && e.identity().label().equals("outage")
+                && e.identity().pattern().contains(NEW_VALUE)), "gate: " + gate);
+        assertTrue(gate.stream().allMatch(e -> e.identity().pattern().contains(NEW_VALUE)
+                || e.identity().pattern().contains("dispatch")), "gate: " + gate);
         // The old planted artefacts are unchanged; the reply address is resolved.
         for (String old : List.of("ivr7", "blq", "fernhill")) {
-            assertTrue(patterns(since.unchanged()).stream().anyMatch(p -> p.equals(old) || p.contains(old)),
+            assertTrue(patterns(since.unchanged()).stream().anyMatch(p -> p.contains(old)),
                     old + " unchanged: " + patterns(since.unchanged()));
         }
-        assertTrue(patterns(since.resolved()).contains("ledgerline.example"), "resolved: " + patterns(since.resolved()));
-        assertFalse(patterns(since.unchanged()).contains("ledgerline.example"));
+        assertTrue(patterns(since.resolved()).stream().anyMatch(p -> p.contains("ledgerline.example")), "resolved: " + patterns(since.resolved()));
+        assertFalse(patterns(since.unchanged()).stream().anyMatch(p -> p.contains("ledgerline.example")));
         Set<String> shown = new java.util.HashSet<>(patterns(since.added()));
         shown.addAll(patterns(since.unchanged()));
         assertEquals(AuditJson.read(secondOut.resolve("audit.json")).findings().stream()
@@ -164,7 +166,7 @@ class BaselineAuditTest {
         assertEquals(ExitCodes.OK, Main.run(audit(model, thirdCorpus, dir.resolve("third"), "--baseline", baseline.toString())));
         Baseline.Comparison quiet = BaselineJson.section(dir.resolve("third/audit.json")).orElseThrow();
         assertEquals(Set.of(), patterns(quiet.gate(Severity.MEDIUM)), "nothing new: " + quiet.added());
-        assertTrue(patterns(quiet.resolved()).contains("ledgerline.example"));
+        assertTrue(patterns(quiet.resolved()).stream().anyMatch(p -> p.contains("ledgerline.example")));
         assertEquals(ExitCodes.GATE, Main.run(audit(model, thirdCorpus, dir.resolve("third"), "--baseline", baseline.toString(),
                 "--fail-on-all", "--force")));
         assertEquals(ExitCodes.GATE, Main.run(audit(model, thirdCorpus, dir.resolve("third"), "--force")));
