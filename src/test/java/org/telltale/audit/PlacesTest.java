@@ -102,4 +102,22 @@ class PlacesTest {
         assertEquals(false, repeats.isBoilerplate("unique observation number 3 about pole 21"));
         assertEquals(0, repeats.count("Thanks,"), "short lines are never boilerplate");
     }
+
+    /**
+     * Identifier patterns read only the text around tokens with a digit, and address patterns only
+     * tokens with '@', "://" or '.': dates that span three tokens (RFC 5322 §3.3 "22 Aug 2002",
+     * from memory), a time with its "PM" and an offset after white space must still be placed
+     * whole, and words far from any digit or dot stay content.
+     */
+    @Test
+    void identifiersSpanningSeveralTokensArePlacedWholeAndPlainWordsAreNot() {
+        String text = "the meter hums\nread on 22 Aug 2002 at 10:30 PM\tzone +0200 then Aug 22, 2002\n"
+                + "plain words only here\nmail desk@fernhill.example today\n";
+        Places places = Places.of(text, line -> false);
+        assertEquals(java.util.List.of(ArtefactKind.IDENTIFIER, ArtefactKind.IDENTIFIER, ArtefactKind.IDENTIFIER,
+                        ArtefactKind.IDENTIFIER, ArtefactKind.CONTENT, ArtefactKind.ADDRESS, ArtefactKind.CONTENT),
+                java.util.List.of(kindOf(places, text, "Aug"), kindOf(places, text, "PM"), kindOf(places, text, "+0200"),
+                        kindAt(places, text, "Aug", text.indexOf("then")), kindOf(places, text, "words"),
+                        kindOf(places, text, "fernhill"), kindOf(places, text, "today")));
+    }
 }
