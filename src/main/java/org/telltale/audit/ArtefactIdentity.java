@@ -32,9 +32,9 @@ public record ArtefactIdentity(String kind, String label, String pattern) {
         return new ArtefactIdentity(kind.key(), label, normalise(pattern));
     }
 
-    /** The identity of a finding; its pattern is its term. */
-    public static ArtefactIdentity of(AuditResult.Finding finding) {
-        return of(finding.kind(), finding.label(), finding.term());
+    /** The identity of a reported artefact. */
+    public static ArtefactIdentity of(AuditResult.Artefact artefact) {
+        return of(artefact.kind(), artefact.label(), artefact.pattern());
     }
 
     /** NFKC, lower case (Locale.ROOT), white space collapsed and trimmed. */

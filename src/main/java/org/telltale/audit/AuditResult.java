@@ -8,32 +8,33 @@ import java.util.Objects;
 import org.telltale.text.Span;
 
 /**
- * Everything one audit concluded: a summary of the run, the findings, the scrub test per kind and
- * the documents picked for a reviewer. Its public face is the {@code telltale.audit} v1 JSON
- * contract written by {@code org.telltale.report.json.AuditJson}; a report can always be rendered
- * from that file alone (together with {@code explanations.jsonl}).
+ * Everything one audit concluded: a summary of the run, the artefacts (each with its terms and its
+ * own scrub), the scrub test per kind and all at once, the documents picked for a reviewer, and the
+ * statistics of every tested term. Its public face is the {@code telltale.audit} v2 JSON contract
+ * written by {@code org.telltale.report.json.AuditJson}; a report can always be rendered from that
+ * file alone (together with {@code explanations.jsonl}).
  *
  * <p>Immutable; collections are copied on construction.
  */
-public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> scrub, List<String> picks,
-                          List<Artefact> artefacts, List<TermStat> terms) {
+public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub> scrub, List<String> picks,
+                          List<TermStat> terms) {
 
     public AuditResult {
         Objects.requireNonNull(summary, "summary");
-        findings = List.copyOf(findings);
+        artefacts = List.copyOf(artefacts);
         scrub = List.copyOf(scrub);
         picks = List.copyOf(picks);
-        artefacts = List.copyOf(artefacts);
         terms = List.copyOf(terms);
     }
 
-    public AuditResult(Summary summary, List<Finding> findings, List<Scrub> scrub, List<String> picks) {
-        this(summary, findings, scrub, picks, List.of(), List.of());
+    /** The artefacts a CI gate counts: not suppressed by the policy, at least {@code severity}. */
+    public List<Artefact> open(Severity severity) {
+        return artefacts.stream().filter(a -> !a.suppressed() && a.severity().atLeast(severity)).toList();
     }
 
-    /** The artefacts a CI gate counts: not suppressed by the policy, at least {@code severity}. */
-    public List<Artefact> openArtefacts(Severity severity) {
-        return artefacts.stream().filter(a -> !a.suppressed() && a.severity().atLeast(severity)).toList();
+    /** An unmodifiable copy that keeps the caller's order, so JSON output is stable. */
+    static <K, V> Map<K, V> ordered(Map<K, V> map) {
+        return Collections.unmodifiableMap(new LinkedHashMap<>(map));
     }
 
     /**
@@ -133,16 +134,6 @@ public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> s
         }
     }
 
-    /** An unmodifiable copy that keeps the caller's order, so JSON output is stable. */
-    static <K, V> Map<K, V> ordered(Map<K, V> map) {
-        return Collections.unmodifiableMap(new LinkedHashMap<>(map));
-    }
-
-    /** The findings a CI gate counts: not suppressed by the policy, at least {@code severity}. */
-    public List<Finding> open(Severity severity) {
-        return findings.stream().filter(f -> !f.suppressed() && f.severity().atLeast(severity)).toList();
-    }
-
     /**
      * What was audited and how.
      *
@@ -194,72 +185,7 @@ public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> s
         }
     }
 
-    /**
-     * A term flagged as a likely artefact, with the evidence for it.
-     *
-     * @param term             the analyzed term
-     * @param kind             where its occurrences sit (the dominant non-content place)
-     * @param severity         see {@link SeverityRules}
-     * @param label            the label it pushes the model towards and is associated with
-     * @param support          corpus documents that contain the term
-     * @param importance       sqrt of the summed absolute weights over explained documents
-     *                         (Ribeiro et al. 2016, §4)
-     * @param association      the z-statistic against the label prior; same value as {@code z}
-     * @param confirmed        whether scrubbing its label's flagged terms moved the predictions of
-     *                         explained documents that contain it
-     * @param z                one-sided z-statistic (Gardner et al. 2021, Eq. 1, prior as null)
-     * @param pmi              log2 p̂(label | term) / p(label)
-     * @param pLabelGivenTerm  p̂(label | term) over the corpus
-     * @param df               corpus documents containing the term, per label (association basis)
-     * @param meanWeight       mean signed weight over the explanations that selected it
-     * @param signConsistency  share of those weights with the sign of the mean
-     * @param selectedIn       explained documents whose explanation selected it for {@code label}
-     * @param suppressed       whether the policy accepts it as expected evidence
-     * @param policy           {@code accepted}, {@code artefact} or {@code null}: the policy rule
-     *                         that matched
-     * @param policyNote       the reviewer's note on that rule, or {@code null}
-     * @param kindShares       share of the term's corpus occurrences in each place
-     * @param scrubFlips       explained documents containing it whose prediction flipped when its
-     *                         label's flagged terms were removed together
-     * @param scrubDrop        mean drop of {@code label}'s score in the documents containing it
-     * @param examples         explained documents where it was selected, with its spans there
-     */
-    public record Finding(
-            String term,
-            ArtefactKind kind,
-            Severity severity,
-            String label,
-            long support,
-            double importance,
-            double association,
-            boolean confirmed,
-            double z,
-            double pmi,
-            double pLabelGivenTerm,
-            Map<String, Long> df,
-            double meanWeight,
-            double signConsistency,
-            int selectedIn,
-            boolean suppressed,
-            String policy,
-            String policyNote,
-            Map<String, Double> kindShares,
-            int scrubFlips,
-            double scrubDrop,
-            List<Example> examples) {
-
-        public Finding {
-            Objects.requireNonNull(term, "term");
-            Objects.requireNonNull(kind, "kind");
-            Objects.requireNonNull(severity, "severity");
-            Objects.requireNonNull(label, "label");
-            df = ordered(df);
-            kindShares = ordered(kindShares);
-            examples = List.copyOf(examples);
-        }
-    }
-
-    /** One explained document where a finding's term was selected, and the term's spans in it. */
+    /** One explained document and the spans marked in it. */
     public record Example(String id, List<Span> spans) {
         public Example {
             Objects.requireNonNull(id, "id");
@@ -267,14 +193,18 @@ public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> s
         }
     }
 
+    /** The key of the scrub row that removes every artefact at once. */
+    public static final String ALL = "all";
+
     /**
-     * The scrub test of one kind: documents rewritten without the kind's flagged terms (or its
-     * whole offending lines and blocks) and scored again.
+     * The scrub test of one kind's artefacts together, or of all artefacts at once: documents
+     * rewritten without them and scored again.
      *
-     * @param kind           the kind scrubbed
-     * @param mode           {@code terms} (the flagged terms' spans cut) or {@code lines} (whole
-     *                       header blocks or repeated lines cut)
-     * @param terms          the flagged terms of this kind
+     * @param kind           the kind scrubbed, or {@link #ALL}
+     * @param mode           how the kind is cut: {@code lines} (header fields and repeated lines),
+     *                       {@code matches} (addresses and identifiers), {@code terms} (content),
+     *                       or {@code mixed} for all at once
+     * @param artefacts      the ids of the artefacts removed
      * @param scope          {@code explained} or {@code corpus} (with {@code --scrub-all})
      * @param documents      documents rewritten (those the scrub changed)
      * @param flips          of those, documents whose predicted label changed
@@ -284,9 +214,9 @@ public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> s
      * @param accuracyAfter  accuracy after it, or {@code null}
      */
     public record Scrub(
-            ArtefactKind kind,
+            String kind,
             String mode,
-            List<String> terms,
+            List<String> artefacts,
             String scope,
             int documents,
             int flips,
@@ -297,7 +227,12 @@ public record AuditResult(Summary summary, List<Finding> findings, List<Scrub> s
 
         public Scrub {
             Objects.requireNonNull(kind, "kind");
-            terms = List.copyOf(terms);
+            artefacts = List.copyOf(artefacts);
+        }
+
+        /** Whether this row removed every artefact at once. */
+        public boolean all() {
+            return ALL.equals(kind);
         }
     }
 }

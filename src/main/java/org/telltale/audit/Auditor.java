@@ -14,7 +14,6 @@ import java.util.function.Supplier;
 import org.apache.lucene.analysis.Analyzer;
 import org.telltale.OutOfResources;
 import org.telltale.TelltaleException;
-import org.telltale.audit.AuditResult.Finding;
 import org.telltale.audit.AuditResult.Scrub;
 import org.telltale.audit.AuditResult.Summary;
 import org.telltale.explain.Explanation;
@@ -25,7 +24,7 @@ import org.telltale.text.Document;
 
 /**
  * Runs one audit: scores the whole corpus in batches, explains a stratified sample, counts the
- * tested terms across the corpus, decides findings, scrubs and rescores, and picks documents for
+ * tested terms across the corpus, decides artefacts, scrubs and rescores, and picks documents for
  * the reviewer. The corpus is read as a stream four times at most and never held; what stays in
  * memory is the sample, two bytes per document for its prediction, bounded line counts, and
  * counts for the terms the explanations selected.
@@ -134,8 +133,9 @@ public final class Auditor {
 
     /**
      * Everything after explaining, on one machine: counts the selected terms (through
-     * {@code counting}), decides findings, scrubs and rescores the explained documents (or, with
-     * --scrub-all, the corpus from {@code scrubCorpus}), and picks documents for the reviewer.
+     * {@code counting}), flags terms and groups them into artefacts, scrubs each artefact alone
+     * from the explained documents, scrubs each kind and all artefacts at once (with --scrub-all
+     * from the corpus of {@code scrubCorpus}), and picks documents for the reviewer.
      * The single-machine audit and the Spark front both end here.
      *
      * @param scrubCorpus the corpus for --scrub-all; may be null when the audit does not scrub all
@@ -166,34 +166,20 @@ public final class Auditor {
         ScrubTest scrubTest = new ScrubTest(classifier, rewriter, settings.batch());
         List<ScrubTest.Scored> explained = scored(explanations, labels, scoring.sampled());
 
-        progress.phase("scrubbing", rules.candidates().size());
-        Map<String, Set<String>> groups = new LinkedHashMap<>();
-        for (FindingRules.Candidate c : rules.candidates()) {
-            if (!c.suppressed()) {
-                groups.computeIfAbsent(c.label(), k -> new TreeSet<>()).add(c.term());
-            }
-        }
-        Map<String, Map<String, ScrubTest.Effect>> effects = new HashMap<>();
-        groups.forEach((label, group) -> effects.put(label, guarded("the explained documents while scrubbing terms of " + label,
-                () -> scrubTest.group(label, group, explained))));
-        List<Finding> findings = new ArrayList<>();
-        for (FindingRules.Candidate c : rules.candidates()) {
-            ScrubTest.Effect effect = effects.getOrDefault(c.label(), Map.of()).getOrDefault(c.term(), ScrubTest.Effect.NONE);
-            findings.add(c.finish(effect.flips(), effect.meanDrop()));
-            progress.advance(1);
-        }
-        findings.sort(FindingRules.ORDER);
-        List<Scrub> scrub = scrubKinds(findings, scrubTest, explained, scrubCorpus);
-
+        List<ArtefactGrouping.Group> groups = ArtefactGrouping.group(rules.candidates(), terms);
+        progress.phase("scrubbing", groups.size());
         ArtefactAssembly assembly = new ArtefactAssembly(policy, rewriter, scrubTest);
         List<AuditResult.Artefact> artefacts = new ArrayList<>();
         Map<String, String> artefactOfTerm = new HashMap<>();
-        for (ArtefactGrouping.Group group : ArtefactGrouping.group(rules.candidates(), terms)) {
+        Map<String, Rewriter.Target> targets = new HashMap<>();
+        for (ArtefactGrouping.Group group : groups) {
             AuditResult.Artefact artefact = guarded("the explained documents while scrubbing the " + group.kind().key()
                     + " artefact '" + group.pattern() + "'", () -> assembly.finish(group, explained, explanations,
                     scoring.sampled()));
             artefacts.add(artefact);
+            targets.put(artefact.id(), ArtefactAssembly.target(group));
             group.terms().forEach(t -> artefactOfTerm.put(t + '\u0000' + group.label(), artefact.id()));
+            progress.advance(1);
         }
         artefacts.sort(ArtefactAssembly.ORDER);
         List<AuditResult.TermStat> termStats = new ArrayList<>();
@@ -201,6 +187,7 @@ public final class Auditor {
             termStats.add(new AuditResult.TermStat(t.term(), t.label(), t.kind(), t.support(), t.importance(),
                     t.association(), t.pmi(), t.weight(), t.selectedIn(), artefactOfTerm.get(t.term() + '\u0000' + t.label())));
         }
+        List<Scrub> scrub = scrubKinds(artefacts, targets, scrubTest, explained, scrubCorpus);
         progress.done();
 
         List<SubmodularPick.Row> rows = new ArrayList<>();
@@ -216,7 +203,7 @@ public final class Auditor {
                 retries.getAsLong(), model, corpusName, seed, settings, gold ? "gold" : "predicted", prior,
                 scoring.predictedCounts(), rules.threshold(), rules.tested(), picks.coverage(),
                 (System.nanoTime() - started) / 1_000_000);
-        return new Outcome(new AuditResult(summary, findings, scrub, picks.ids(), artefacts, termStats), explanations);
+        return new Outcome(new AuditResult(summary, artefacts, scrub, picks.ids(), termStats), explanations);
     }
 
     // ---- pass 1: score every document, count lines, draw the sample
@@ -398,30 +385,48 @@ public final class Auditor {
         return out;
     }
 
-    // ---- pass 4 (with --scrub-all): scrub per kind
+    // ---- pass 4 (with --scrub-all): scrub per kind and all at once
 
-    private List<Scrub> scrubKinds(List<Finding> findings, ScrubTest scrubTest, List<ScrubTest.Scored> explained,
-            Supplier<CorpusReader> corpus) {
-        Map<ArtefactKind, Set<String>> byKind = new EnumMap<>(ArtefactKind.class);
-        for (Finding f : findings) {
-            if (!f.suppressed()) {
-                byKind.computeIfAbsent(f.kind(), k -> new TreeSet<>()).add(f.term());
+    /**
+     * One row per kind with open artefacts, removing that kind's artefacts together, and one row
+     * removing every open artefact at once: how much of the model's accuracy rests on them.
+     */
+    private List<Scrub> scrubKinds(List<AuditResult.Artefact> artefacts, Map<String, Rewriter.Target> targets,
+            ScrubTest scrubTest, List<ScrubTest.Scored> explained, Supplier<CorpusReader> corpus) {
+        Map<ArtefactKind, List<AuditResult.Artefact>> byKind = new EnumMap<>(ArtefactKind.class);
+        List<AuditResult.Artefact> open = new ArrayList<>();
+        for (AuditResult.Artefact a : artefacts) {
+            if (!a.suppressed()) {
+                byKind.computeIfAbsent(a.kind(), k -> new ArrayList<>()).add(a);
+                open.add(a);
             }
         }
         List<Scrub> out = new ArrayList<>();
-        for (Map.Entry<ArtefactKind, Set<String>> e : byKind.entrySet()) {
-            ArtefactKind kind = e.getKey();
-            ScrubTest.Effect effect = settings.scrubAll()
-                    ? scrubCorpus(kind, e.getValue(), scrubTest, corpus)
-                    : scrubTest.kind(kind, e.getValue(), explained);
-            out.add(new Scrub(kind, Rewriter.modeOf(kind).key(), List.copyOf(e.getValue()),
-                    settings.scrubAll() ? "corpus" : "explained", effect.documents(), effect.flips(), effect.flipRate(),
-                    effect.meanDrop(), effect.accuracyBefore(), effect.accuracyAfter()));
+        for (Map.Entry<ArtefactKind, List<AuditResult.Artefact>> e : byKind.entrySet()) {
+            out.add(scrubRow(e.getKey().key(), Rewriter.artefactMode(e.getKey()), e.getValue(), targets, scrubTest,
+                    explained, corpus));
+        }
+        if (!open.isEmpty()) {
+            out.add(scrubRow(AuditResult.ALL, byKind.size() == 1 ? out.get(0).mode() : "mixed", open, targets, scrubTest,
+                    explained, corpus));
         }
         return out;
     }
 
-    private ScrubTest.Effect scrubCorpus(ArtefactKind kind, Set<String> terms, ScrubTest scrubTest,
+    private Scrub scrubRow(String kind, String mode, List<AuditResult.Artefact> artefacts,
+            Map<String, Rewriter.Target> targets, ScrubTest scrubTest, List<ScrubTest.Scored> explained,
+            Supplier<CorpusReader> corpus) {
+        List<Rewriter.Target> removed = artefacts.stream().map(a -> targets.get(a.id())).toList();
+        String what = AuditResult.ALL.equals(kind) ? "all artefacts" : kind + " artefacts";
+        ScrubTest.Effect effect = settings.scrubAll()
+                ? scrubCorpus(what, removed, scrubTest, corpus)
+                : guarded("the explained documents while scrubbing " + what, () -> scrubTest.together(removed, explained));
+        return new Scrub(kind, mode, artefacts.stream().map(AuditResult.Artefact::id).toList(),
+                settings.scrubAll() ? "corpus" : "explained", effect.documents(), effect.flips(), effect.flipRate(),
+                effect.meanDrop(), effect.accuracyBefore(), effect.accuracyAfter());
+    }
+
+    private ScrubTest.Effect scrubCorpus(String what, List<Rewriter.Target> targets, ScrubTest scrubTest,
             Supplier<CorpusReader> corpus) {
         ScrubTest.Effect sum = ScrubTest.Effect.NONE;
         try (CorpusReader reader = corpus.get()) {
@@ -429,22 +434,22 @@ public final class Auditor {
             while (reader.hasNext()) {
                 chunk.add(reader.next());
                 if (chunk.size() == settings.batch()) {
-                    sum = sum.plus(scrubChunk(kind, terms, scrubTest, chunk));
+                    sum = sum.plus(scrubChunk(what, targets, scrubTest, chunk));
                     chunk.clear();
                 }
             }
             if (!chunk.isEmpty()) {
-                sum = sum.plus(scrubChunk(kind, terms, scrubTest, chunk));
+                sum = sum.plus(scrubChunk(what, targets, scrubTest, chunk));
             }
         }
         return sum;
     }
 
-    private static ScrubTest.Effect scrubChunk(ArtefactKind kind, Set<String> terms, ScrubTest scrubTest,
+    private static ScrubTest.Effect scrubChunk(String what, List<Rewriter.Target> targets, ScrubTest scrubTest,
             List<Document> chunk) {
         return guarded("documents '" + chunk.get(0).id() + "' to '"
-                + chunk.get(chunk.size() - 1).id() + "' while scrubbing " + kind.key(),
-                () -> scrubTest.kindUnscored(kind, terms, chunk));
+                + chunk.get(chunk.size() - 1).id() + "' while scrubbing " + what,
+                () -> scrubTest.togetherUnscored(targets, chunk));
     }
 
     /** Runs work on {@code place}; if the JVM runs out of stack or memory, the error names the place and the way on. */

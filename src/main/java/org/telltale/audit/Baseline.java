@@ -49,11 +49,6 @@ public record Baseline(String source, List<Entry> entries) {
             Objects.requireNonNull(severity, "severity");
         }
 
-        /** A finding of an audit; its pattern is its term. */
-        public static Entry of(AuditResult.Finding finding) {
-            return new Entry(ArtefactIdentity.of(finding), finding.severity(), finding.suppressed());
-        }
-
         /** An artefact of an audit, by its kind, label and pattern. */
         public static Entry of(AuditResult.Artefact artefact) {
             return new Entry(artefact.identity(), artefact.severity(), artefact.suppressed());
@@ -61,12 +56,11 @@ public record Baseline(String source, List<Entry> entries) {
     }
 
     /**
-     * The artefacts of {@code audit}, in its order: its findings, which the {@code telltale.audit}
-     * version 1 contract reports (when audit.json carries artefacts, they take the findings' place
-     * here, through {@link Entry#of(AuditResult.Artefact)}).
+     * The artefacts of {@code audit}, in its order (a version 1 audit.json reads as one artefact per
+     * finding, its pattern the term, so an old baseline compares by the same identity it had).
      */
     public static List<Entry> entriesOf(AuditResult audit) {
-        return audit.findings().stream().map(Entry::of).toList();
+        return audit.artefacts().stream().map(Entry::of).toList();
     }
 
     /**

@@ -178,6 +178,18 @@ public final class CorpusTerms implements Serializable {
         return best == null ? null : new PlaceRef(kind, best.substring(prefix.length()), shown.get(best));
     }
 
+    /** The term's occurrences in the place of {@code kind} and {@code key}. */
+    long occurrencesIn(String term, ArtefactKind kind, String key) {
+        Map<String, Long> counts = placeCounts.get(term);
+        return counts == null ? 0 : counts.getOrDefault(placeId(kind, key), 0L);
+    }
+
+    /** The term's occurrences in places of {@code kind}. */
+    long occurrencesOfKind(String term, ArtefactKind kind) {
+        long[] p = places.get(term);
+        return p == null ? 0 : p[kind.ordinal()];
+    }
+
     /** How many distinct values the identifier place {@code key} took, counted up to {@link #VALUES_KEPT}. */
     int distinctValues(String key) {
         java.util.TreeSet<String> kept = values.get(placeId(ArtefactKind.IDENTIFIER, key));

@@ -1,19 +1,18 @@
 package org.telltale.audit;
 
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import org.telltale.audit.AuditResult.Finding;
 
 /**
- * Decides which (term, label) pairs are findings: the explanations weigh the term towards the
+ * Decides which (term, label) pairs are flagged, to be grouped into artefacts ({@link ArtefactGrouping}): the explanations weigh the term towards the
  * label (mean weight above zero) with an importance of at least {@value #IMPORTANCE_SHARE} of the
  * label's most important term; the corpus associates the term with the label beyond the
  * Bonferroni-corrected threshold and by at least {@value #MIN_PMI} bits of PMI; and its
- * occurrences sit mostly outside content — or the policy marks it {@code artefact}. Severity and confirmation come later, from the scrub test.
+ * occurrences sit mostly outside content — or the policy marks it {@code artefact}. Severity and
+ * confirmation come later, per artefact, from its own scrub.
  */
 final class FindingRules {
     /** A term must reach this share of its label's top importance to count as important. */
@@ -27,7 +26,7 @@ final class FindingRules {
      */
     static final double MIN_PMI = 0.5;
 
-    /** A finding before the scrub test has confirmed it or not. */
+    /** A flagged (term, label) pair with its statistics and the policy rule that matched it. */
     record Candidate(TermWeights.Entry entry, ArtefactKind kind, long support, double z, double pmi,
             double pLabelGivenTerm, Map<String, Long> df, Map<String, Double> kindShares,
             boolean significant, Optional<Policy.Rule> rule) {
@@ -42,16 +41,6 @@ final class FindingRules {
 
         boolean suppressed() {
             return rule.map(r -> r.status() == Policy.Status.ACCEPTED).orElse(false);
-        }
-
-        Finding finish(int flips, double drop) {
-            boolean confirmed = SeverityRules.confirmed(flips, drop);
-            boolean artefact = rule.map(r -> r.status() == Policy.Status.ARTEFACT).orElse(false);
-            Severity severity = SeverityRules.of(confirmed, significant, pLabelGivenTerm, artefact);
-            return new Finding(term(), kind, severity, label(), support, entry.importance(), z, confirmed, z, pmi,
-                    pLabelGivenTerm, df, entry.meanWeight(), entry.signConsistency(), entry.selected(),
-                    suppressed(), rule.map(r -> r.status().key()).orElse(null), rule.map(Policy.Rule::note).orElse(null),
-                    kindShares, flips, drop, entry.examples());
         }
     }
 
@@ -106,11 +95,6 @@ final class FindingRules {
         }
         return new Outcome(candidates, tested, threshold, stats);
     }
-
-    /** Findings in report order: severity, then importance, then term and label. */
-    static final Comparator<Finding> ORDER = Comparator.comparing(Finding::severity)
-            .thenComparing(Comparator.comparingDouble(Finding::importance).reversed())
-            .thenComparing(Finding::term).thenComparing(Finding::label);
 
     private static long support(Map<String, Long> df) {
         return df.values().stream().mapToLong(Long::longValue).sum();

@@ -21,13 +21,14 @@ public final class PlaceKeys {
 
     /**
      * A repeated line's template: lower case, runs of white space as one space, trimmed, every digit
-     * as {@code #}, so that "Exported by Casefile Archive 3.2" and "exported by  casefile archive 3.4"
-     * are one line.
+     * as {@code #}, leading quote markers of a reply ({@code > }) left out, so that "Exported by
+     * Casefile Archive 3.2", "exported by  casefile archive 3.4" and "> Exported by Casefile Archive
+     * 3.2" are one line.
      */
     public static String lineTemplate(String line) {
         StringBuilder out = new StringBuilder(line.length());
         boolean space = false;
-        for (int i = 0; i < line.length(); i++) {
+        for (int i = quoteEnd(line); i < line.length(); i++) {
             char c = line.charAt(i);
             if (Character.isWhitespace(c)) {
                 space = out.length() > 0;
@@ -40,6 +41,23 @@ public final class PlaceKeys {
             out.append(Character.isDigit(c) ? '#' : Character.toLowerCase(c));
         }
         return out.toString();
+    }
+
+    /**
+     * A repeated line as shown: trimmed, without the quote markers of a quoted reply, so that
+     * "> Odile Brandvold | Network Care" is shown as the line it quotes.
+     */
+    public static String lineShown(String line) {
+        return line.substring(quoteEnd(line)).strip();
+    }
+
+    /** Where the leading quote markers ({@code >}, RFC 3676 §4.5) and the white space around them end. */
+    private static int quoteEnd(String line) {
+        int i = 0;
+        while (i < line.length() && (line.charAt(i) == '>' || Character.isWhitespace(line.charAt(i)))) {
+            i++;
+        }
+        return i;
     }
 
     /** An identifier's shape as written: letters and punctuation kept, every digit as {@code #} ({@code HR-#####}). */

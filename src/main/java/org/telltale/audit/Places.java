@@ -111,7 +111,7 @@ public final class Places {
         for (Span line : lines) {
             String content = text.substring(line.start(), line.end());
             if (boilerplate.test(content)) {
-                String shown = content.strip();
+                String shown = PlaceKeys.lineShown(content);
                 add(kinds, owners, places, new Place(line, ArtefactKind.BOILERPLATE, PlaceKeys.lineTemplate(shown), shown));
             }
         }

@@ -37,7 +37,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "audit", mixinStandardHelpOptions = false, versionProvider = VersionProvider.class,
         description = {"Scores a whole corpus, explains a stratified sample, and reports terms the model leans on "
                 + "that sit in headers, addresses, identifiers or boilerplate; proves the dependence by scrubbing.",
-            "Exit codes: 0 clean, 3 findings at or above --fail-on remain (with --baseline: new ones), 1 error, 2 usage."})
+            "Exit codes: 0 clean, 3 artefacts at or above --fail-on remain (with --baseline: new ones), 1 error, 2 usage."})
 final class AuditCommand implements Callable<Integer> {
     @Mixin CommonOptions common;
     @Mixin ModelOptions model;
@@ -53,9 +53,9 @@ final class AuditCommand implements Callable<Integer> {
     int words;
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "telltale-audit", description = "Output folder. Default: ${DEFAULT-VALUE}.")
     Path out;
-    @Option(names = "--policy", paramLabel = "FILE", description = "Reviewer decisions: terms or patterns marked accepted or artefact (docs/audit.md).")
+    @Option(names = "--policy", paramLabel = "FILE", description = "Reviewer decisions: terms, term patterns or whole artefacts (kind and glob) marked accepted or artefact (docs/audit.md).")
     Path policy;
-    @Option(names = "--fail-on", paramLabel = "LEVEL", defaultValue = "high", description = "Exit 3 when findings at or above high, medium or low remain; never to always exit 0. Default: ${DEFAULT-VALUE}.")
+    @Option(names = "--fail-on", paramLabel = "LEVEL", defaultValue = "high", description = "Exit 3 when artefacts at or above high, medium or low remain; never to always exit 0. Default: ${DEFAULT-VALUE}.")
     String failOn;
     @Option(names = "--resume", description = "Continue the audit whose journal is in --out, redoing nothing it finished.")
     boolean resume;
@@ -69,7 +69,7 @@ final class AuditCommand implements Callable<Integer> {
     boolean quiet;
     @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Seed of every random choice. Default: ${DEFAULT-VALUE}.")
     long seed;
-    @Option(names = "--sarif", paramLabel = "FILE", description = "Also write the findings as a SARIF 2.1.0 log for code-scanning views (docs/ci.md); replaced only with --force.")
+    @Option(names = "--sarif", paramLabel = "FILE", description = "Also write the artefacts as a SARIF 2.1.0 log for code-scanning views (docs/ci.md); replaced only with --force.")
     Path sarif;
     @Option(names = "--baseline", paramLabel = "FILE", description = "An earlier audit.json: each finding is reported new, unchanged or resolved against it, and --fail-on counts new findings only (docs/ci.md).")
     Path baseline;

@@ -5,12 +5,12 @@ import java.util.List;
 import java.util.Locale;
 import org.telltale.audit.AuditResult;
 import org.telltale.audit.Baseline;
-import org.telltale.audit.AuditResult.Finding;
+import org.telltale.audit.AuditResult.Artefact;
 import org.telltale.audit.AuditResult.Scrub;
 
-/** The audit's outcome on the terminal: the top findings, the scrub test and where the files are. */
+/** The audit's outcome on the terminal: the top artefacts, the scrub test and where the files are. */
 final class AuditPrinter {
-    /** Findings shown on the terminal; the rest are in audit.json and the report. */
+    /** Artefacts shown on the terminal; the rest are in audit.json and the report. */
     static final int TOP = 15;
 
     private AuditPrinter() {
@@ -37,20 +37,20 @@ final class AuditPrinter {
         if (!concurrency.isEmpty()) {
             out.println("model " + concurrency);
         }
-        List<Finding> findings = result.findings();
-        long open = findings.stream().filter(f -> !f.suppressed()).count();
-        out.printf(Locale.ROOT, "%nfindings: %d (%d suppressed by the policy); z threshold %.2f over %d tests%n",
-                findings.size(), findings.size() - open, s.zThreshold(), s.termsTested());
-        if (!findings.isEmpty()) {
-            out.printf(Locale.ROOT, "  %-8s %-11s %-24s %-12s %7s %8s %6s  %s%n", "severity", "kind", "term", "label",
-                    "docs", "import.", "z", "scrub");
-            for (Finding f : findings.subList(0, Math.min(TOP, findings.size()))) {
-                out.printf(Locale.ROOT, "  %-8s %-11s %-24s %-12s %7d %8.3f %6.1f  %s%s%n", f.severity().key(),
-                        f.kind().key(), clip(f.term(), 24), clip(f.label(), 12), f.support(), f.importance(), f.z(),
-                        f.confirmed() ? "confirmed" : "-", f.suppressed() ? " (suppressed: " + f.policyNote() + ")" : "");
+        List<Artefact> artefacts = result.artefacts();
+        long open = artefacts.stream().filter(a -> !a.suppressed()).count();
+        out.printf(Locale.ROOT, "%nartefacts: %d (%d suppressed by the policy); z threshold %.2f over %d tests%n",
+                artefacts.size(), artefacts.size() - open, s.zThreshold(), s.termsTested());
+        if (!artefacts.isEmpty()) {
+            out.printf(Locale.ROOT, "  %-8s %-11s %-34s %-12s %6s %8s %6s  %s%n", "severity", "kind", "artefact", "label",
+                    "terms", "import.", "z", "own scrub");
+            for (Artefact a : artefacts.subList(0, Math.min(TOP, artefacts.size()))) {
+                out.printf(Locale.ROOT, "  %-8s %-11s %-34s %-12s %6d %8.3f %6.1f  %s%s%n", a.severity().key(),
+                        a.kind().key(), clip(a.pattern(), 34), clip(a.label(), 12), a.terms().size(), a.importance(),
+                        a.association(), scrub(a), a.suppressed() ? " (suppressed: " + a.policyNote() + ")" : "");
             }
-            if (findings.size() > TOP) {
-                out.printf(Locale.ROOT, "  … and %d more in audit.json%n", findings.size() - TOP);
+            if (artefacts.size() > TOP) {
+                out.printf(Locale.ROOT, "  … and %d more in audit.json%n", artefacts.size() - TOP);
             }
         }
         if (since != null) {
@@ -58,11 +58,12 @@ final class AuditPrinter {
         }
         if (!result.scrub().isEmpty()) {
             out.printf(Locale.ROOT, "%nscrub test (%s documents):%n", result.scrub().get(0).scope());
-            out.printf(Locale.ROOT, "  %-11s %-6s %9s %9s %10s %9s %9s%n", "kind", "mode", "documents", "flip rate",
+            out.printf(Locale.ROOT, "  %-11s %-7s %9s %9s %10s %9s %9s%n", "removed", "mode", "documents", "flip rate",
                     "score drop", "acc. was", "acc. now");
             for (Scrub x : result.scrub()) {
-                out.printf(Locale.ROOT, "  %-11s %-6s %9d %9.3f %10.3f %9s %9s%n", x.kind().key(), x.mode(),
-                        x.documents(), x.flipRate(), x.scoreDrop(), share(x.accuracyBefore()), share(x.accuracyAfter()));
+                out.printf(Locale.ROOT, "  %-11s %-7s %9d %9.3f %10.3f %9s %9s%n", x.all() ? "all at once" : x.kind(),
+                        x.mode(), x.documents(), x.flipRate(), x.scoreDrop(), share(x.accuracyBefore()),
+                        share(x.accuracyAfter()));
             }
         }
         out.println();
@@ -87,8 +88,14 @@ final class AuditPrinter {
     }
 
     private static String line(Baseline.State state, Baseline.Entry e) {
-        return String.format(Locale.ROOT, "%-9s %-8s %-11s %-24s %s%s", state.key(), e.severity().key(), e.identity().kind(),
-                clip(e.identity().pattern(), 24), clip(e.identity().label(), 12), e.suppressed() ? " (suppressed)" : "");
+        return String.format(Locale.ROOT, "%-9s %-8s %-11s %-34s %s%s", state.key(), e.severity().key(), e.identity().kind(),
+                clip(e.identity().pattern(), 34), clip(e.identity().label(), 12), e.suppressed() ? " (suppressed)" : "");
+    }
+
+    /** "confirmed 12/20" (flips of the documents its removal changed) or "- 0/20". */
+    private static String scrub(Artefact a) {
+        String counts = a.scrub().flips() + "/" + a.scrub().documents() + " flipped";
+        return a.suppressed() ? "-" : (a.confirmed() ? "confirmed, " : "not moved, ") + counts;
     }
 
     private static String share(Double value) {

@@ -48,7 +48,7 @@ public final class CliReference {
                 .append("Generated from the picocli model by `org.telltale.cli.CliReference`; do not edit by hand.\n")
                 .append("Regenerate with `mvn -q -DskipTests package && java -cp target/telltale.jar ")
                 .append("org.telltale.cli.CliReference docs/cli.md`.\n\n")
-                .append("Exit codes: 0 ok, 1 error, 2 usage error, 3 audit findings at or above `--fail-on`.\n\n");
+                .append("Exit codes: 0 ok, 1 error, 2 usage error, 3 audit artefacts at or above `--fail-on`.\n\n");
         command(md, root, "telltale");
         for (Map.Entry<String, CommandLine> sub : root.getSubcommands().entrySet()) {
             command(md, sub.getValue(), "telltale " + sub.getKey());

@@ -24,7 +24,7 @@ import picocli.CommandLine.Spec;
         description = {
             "Renders a self-contained HTML report from audit.json (with the explanations.jsonl beside it) "
                     + "or from explanations written by explain --json; the kind is read from the file's format field. "
-                    + "From audit.json it also writes the findings as a SARIF 2.1.0 log (--sarif).",
+                    + "From audit.json (version 1 or 2) it also writes the artefacts as a SARIF 2.1.0 log (--sarif).",
             "The report contains document text and may contain personal data: handle it under your "
                     + "organisation's data-protection rules."})
 final class ReportCommand implements Callable<Integer> {
@@ -42,7 +42,7 @@ final class ReportCommand implements Callable<Integer> {
     Path out;
 
     @Option(names = "--sarif", paramLabel = "FILE",
-            description = "Write the audit's findings as a SARIF 2.1.0 log (from audit.json only; docs/ci.md).")
+            description = "Write the audit's artefacts as a SARIF 2.1.0 log (from audit.json only; docs/ci.md).")
     Path sarif;
 
     /** With --sarif: the corpus the audit read, so that locations point at its records' lines. */
@@ -63,7 +63,7 @@ final class ReportCommand implements Callable<Integer> {
             throw new UsageException("nothing to write: give --out FILE, --sarif FILE or both");
         }
         if (corpus.given() && sarif == null) {
-            throw new UsageException("--corpus is read only with --sarif (it locates the findings' documents)");
+            throw new UsageException("--corpus is read only with --sarif (it locates the artefacts' documents)");
         }
         if (out != null) {
             HtmlReports.refuseToReplace(out, force);

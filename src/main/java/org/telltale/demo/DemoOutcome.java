@@ -31,7 +31,7 @@ public record DemoOutcome(VariantOutcome leaky, VariantOutcome clean) {
         }
         return String.format(Locale.ROOT,
                 "contrast: the leaky model scores %.2f on held-out messages against the clean model's %.2f; "
-                        + "scrubbing costs it %.2f, the clean one %.2f; high findings %d against %d",
+                        + "removing all artefacts costs it %.2f, the clean one %.2f; high artefacts %d against %d",
                 l.accuracy(), c.accuracy(), l.accuracyDrop(), c.accuracyDrop(), l.high(), c.high());
     }
 }

@@ -1,6 +1,5 @@
 package org.telltale.demo;
 
-import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.telltale.audit.AuditResult;
@@ -8,8 +7,9 @@ import org.telltale.audit.AuditResult.Scrub;
 import org.telltale.audit.Severity;
 
 /**
- * The one-line summary of an audit that the demo prints, e.g. "holdout accuracy 0.97 → 0.74 once
- * header lines are scrubbed; 6 artefact terms, 3 high".
+ * The one-line summary of an audit that the demo prints, led by what the model loses when every
+ * artefact goes at once, e.g. "holdout accuracy 0.97 → 0.74 once all 6 artefacts are removed;
+ * 6 artefacts, 4 high".
  *
  * <p>When the scrub test rewrote the whole audited corpus, the accuracy after scrubbing is the
  * corpus-wide figure: documents the scrub left alone keep their predictions, so
@@ -17,25 +17,25 @@ import org.telltale.audit.Severity;
  * rewrote only the explained documents, the figures are for those and the line says so.
  *
  * @param accuracy      accuracy on the audited corpus, or {@code null} without gold labels
- * @param worst         the scrub that cost the most correct predictions, if any scrub ran
- * @param accuracyAfter accuracy after that scrub, on the same documents as {@code accuracy}
+ * @param all           the scrub that removed every open artefact at once, if any ran
+ * @param accuracyAfter accuracy after it, on the same documents as {@code accuracy}
  *                      (corpus-wide) or on the scrubbed documents (explained scope)
- * @param findings      open findings (not suppressed by a policy)
- * @param high          open findings of severity high
+ * @param artefacts     open artefacts (not suppressed by a policy)
+ * @param high          open artefacts of severity high
  */
-public record Headline(Double accuracy, Scrub worst, Double accuracyAfter, int findings, int high) {
+public record Headline(Double accuracy, Scrub all, Double accuracyAfter, int artefacts, int high) {
 
     public static Headline of(AuditResult audit) {
-        List<AuditResult.Finding> open = audit.open(Severity.LOW);
+        int open = audit.open(Severity.LOW).size();
         int high = audit.open(Severity.HIGH).size();
         Double accuracy = audit.summary().accuracy();
-        Optional<Scrub> worst = audit.scrub().stream()
-                .filter(s -> s.accuracyBefore() != null && s.accuracyAfter() != null && s.documents() > 0)
-                .max((a, b) -> Double.compare(a.documents() * drop(a), b.documents() * drop(b)));
-        if (worst.isEmpty()) {
-            return new Headline(accuracy, null, null, open.size(), high);
+        Optional<Scrub> all = audit.scrub().stream()
+                .filter(s -> s.all() && s.accuracyBefore() != null && s.accuracyAfter() != null && s.documents() > 0)
+                .findFirst();
+        if (all.isEmpty()) {
+            return new Headline(accuracy, null, null, open, high);
         }
-        Scrub s = worst.get();
+        Scrub s = all.get();
         Double after;
         if (corpusWide(s) && accuracy != null) {
             double n = audit.summary().documents();
@@ -43,45 +43,36 @@ public record Headline(Double accuracy, Scrub worst, Double accuracyAfter, int f
         } else {
             after = s.accuracyAfter();
         }
-        return new Headline(accuracy, s, after, open.size(), high);
+        return new Headline(accuracy, s, after, open, high);
     }
 
-    /** How much accuracy the worst scrub cost, on the headline's basis; 0 without a scrub. */
+    /** How much accuracy removing every artefact cost, on the headline's basis; 0 without a scrub. */
     public double accuracyDrop() {
-        if (worst == null) {
+        if (all == null) {
             return 0;
         }
-        return corpusWide(worst) && accuracy != null ? accuracy - accuracyAfter : worst.accuracyBefore() - accuracyAfter;
+        return corpusWide(all) && accuracy != null ? accuracy - accuracyAfter : all.accuracyBefore() - accuracyAfter;
     }
 
     /** The line itself. */
     public String text() {
         StringBuilder line = new StringBuilder();
-        if (worst != null) {
-            double before = corpusWide(worst) && accuracy != null ? accuracy : worst.accuracyBefore();
-            line.append(String.format(Locale.ROOT, "%s %.2f → %.2f once %s are scrubbed",
-                    corpusWide(worst) ? "holdout accuracy" : "accuracy on the " + worst.documents() + " scrubbed messages",
-                    before, accuracyAfter, what(worst)));
+        if (all != null) {
+            double before = corpusWide(all) && accuracy != null ? accuracy : all.accuracyBefore();
+            int removed = all.artefacts().size();
+            line.append(String.format(Locale.ROOT, "%s %.2f → %.2f once %s removed",
+                    corpusWide(all) ? "holdout accuracy" : "accuracy on the " + all.documents() + " scrubbed messages",
+                    before, accuracyAfter, removed == 1 ? "its artefact is" : "all " + removed + " artefacts are"));
         } else if (accuracy != null) {
-            line.append(String.format(Locale.ROOT, "holdout accuracy %.2f, nothing to scrub", accuracy));
+            line.append(String.format(Locale.ROOT, "holdout accuracy %.2f, no artefact to remove", accuracy));
         } else {
             line.append("no gold labels, no accuracy");
         }
-        line.append(String.format(Locale.ROOT, "; %d artefact term%s, %d high", findings, findings == 1 ? "" : "s", high));
+        line.append(String.format(Locale.ROOT, "; %d artefact%s, %d high", artefacts, artefacts == 1 ? "" : "s", high));
         return line.toString();
     }
 
     private static boolean corpusWide(Scrub s) {
         return "corpus".equals(s.scope());
-    }
-
-    /** Accuracy lost on the rewritten documents; times their number, the correct predictions lost. */
-    private static double drop(Scrub s) {
-        return s.accuracyBefore() - s.accuracyAfter();
-    }
-
-    /** "header lines", "boilerplate lines", "address terms", ... */
-    private static String what(Scrub s) {
-        return s.kind().key() + ("lines".equals(s.mode()) ? " lines" : " terms");
     }
 }

@@ -30,7 +30,7 @@ import org.telltale.text.Analyzers;
 
 /**
  * {@code telltale audit} as a Spark application: the same options, defaults and exit codes (0
- * clean, 3 findings at or above {@code --fail-on}, 1 error, 2 usage), the corpus read by Spark
+ * clean, 3 artefacts at or above {@code --fail-on}, 1 error, 2 usage), the corpus read by Spark
  * from any path it reads, model work by partition, and the same {@code audit.json},
  * {@code explanations.jsonl} and {@code report.html} in {@code --out} on the driver's file
  * system. Spark reruns failed tasks, so there is no journal: {@code --resume} is refused, and
@@ -136,8 +136,8 @@ public final class SparkAudit {
             files.add(sarif.toString());
         }
         AuditResult.Summary s = result.summary();
-        out.printf(Locale.ROOT, "audited %d documents, explained %d; findings: %d, %d open at or above %s%n",
-                s.documents(), s.explained(), result.findings().size(),
+        out.printf(Locale.ROOT, "audited %d documents, explained %d; artefacts: %d, %d open at or above %s%n",
+                s.documents(), s.explained(), result.artefacts().size(),
                 gate == null ? 0 : result.open(gate).size(), failOn);
         for (String file : files) {
             out.println("  " + file);

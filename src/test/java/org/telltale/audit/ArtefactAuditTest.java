@@ -106,7 +106,7 @@ class ArtefactAuditTest {
         assertTrue(a.suppressed() && "accepted".equals(a.policy()), found);
         assertTrue(a.termNames().size() > 3, "all the footer's terms in one entry: " + a.termNames());
         assertEquals("the kiosk footer is how rentals are logged; expected", a.policyNote());
-        assertTrue(result.openArtefacts(Severity.LOW).stream().noneMatch(PLANTS.get(3)::is), found);
-        assertEquals(3, result.openArtefacts(Severity.MEDIUM).size(), found);
+        assertTrue(result.open(Severity.LOW).stream().noneMatch(PLANTS.get(3)::is), found);
+        assertEquals(3, result.open(Severity.MEDIUM).size(), found);
     }
 }

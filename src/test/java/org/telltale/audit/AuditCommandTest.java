@@ -40,20 +40,20 @@ class AuditCommandTest {
         assertTrue(!result.open(Severity.HIGH).isEmpty());
         assertEquals(30, ExplanationsJson.read(out.resolve("explanations.jsonl")).size());
         String report = Files.readString(out.resolve("report.html"), StandardCharsets.UTF_8);
-        assertTrue(report.contains("Telltale audit") && report.contains("ledgerline.example"), "the HTML report names the findings");
+        assertTrue(report.contains("Telltale audit") && report.contains("ledgerline.example"), "the HTML report names the artefacts");
         assertEquals(31, Files.readAllLines(out.resolve("journal.jsonl"), StandardCharsets.UTF_8).stream()
                 .filter(l -> !l.contains("\"scored\"")).count(), "a start line and one line per explained document");
 
         // An earlier audit is not overwritten without --force; with it, and --fail-on never, exit 0.
         assertEquals(ExitCodes.USAGE, Main.run(audit(model, corpus, out)));
         assertEquals(ExitCodes.OK, Main.run(audit(model, corpus, out, "--force", "--fail-on", "never")));
-        // Resuming a finished audit redoes nothing and gives the same findings.
+        // Resuming a finished audit redoes nothing and gives the same artefacts.
         assertEquals(ExitCodes.GATE, Main.run(audit(model, corpus, out, "--resume")));
-        assertEquals(result.findings(), AuditJson.read(out.resolve("audit.json")).findings());
+        assertEquals(result.artefacts(), AuditJson.read(out.resolve("audit.json")).artefacts());
     }
 
     @Test
-    void acceptedFindingsAreSuppressedNotDropped(@TempDir Path dir) throws Exception {
+    void acceptedArtefactsAreSuppressedNotDropped(@TempDir Path dir) throws Exception {
         Path model = dir.resolve("router.model");
         ModelFile.save(TrainedModels.naiveBayes(UtilityQueues.generate(1, 150, true)), model);
         Path corpus = UtilityQueues.write(UtilityQueues.generate(2, 100, true), dir.resolve("mailbox.jsonl"));
@@ -68,14 +68,17 @@ class AuditCommandTest {
         Path out = dir.resolve("audit");
         Main.run(audit(model, corpus, out, "--policy", policy.toString(), "--fail-on", "never"));
         AuditResult result = AuditJson.read(out.resolve("audit.json"));
-        AuditResult.Finding blq = result.findings().stream().filter(f -> f.term().equals("blq")).findFirst()
-                .orElseThrow(() -> new AssertionError(result.findings()));
+        AuditResult.Artefact blq = result.artefacts().stream().filter(f -> f.termNames().equals(List.of("blq")))
+                .findFirst().orElseThrow(() -> new AssertionError(result.artefacts()));
         assertTrue(blq.suppressed());
+        assertEquals("BLQ-####", blq.pattern());
         assertEquals("accepted", blq.policy());
         assertEquals("billing case codes are known to the router team", blq.policyNote());
-        assertTrue(result.open(Severity.LOW).stream().noneMatch(f -> f.term().equals("blq")));
-        assertTrue(result.scrub().stream().noneMatch(s -> s.terms().contains("blq")), "suppressed terms are not scrubbed");
-        AuditResult.Finding ivr = result.findings().stream().filter(f -> f.term().equals("ivr7")).findFirst()
+        assertTrue(result.open(Severity.LOW).stream().noneMatch(f -> f.termNames().contains("blq")));
+        assertTrue(result.scrub().stream().noneMatch(s -> s.artefacts().contains(blq.id())),
+                "suppressed artefacts are not scrubbed");
+        assertEquals(0, blq.scrub().documents());
+        AuditResult.Artefact ivr = result.artefacts().stream().filter(f -> f.termNames().contains("ivr7")).findFirst()
                 .orElseThrow();
         assertEquals("artefact", ivr.policy());
         assertTrue(ivr.severity().atLeast(Severity.MEDIUM));

@@ -78,9 +78,9 @@ class AuditSarifTest {
         assertEquals(List.of(), SarifMultitool.errors(sarif), "SARIF Multitool validate");
 
         JsonNode run = JSON.readTree(sarif.toFile()).get("runs").get(0);
-        assertEquals(audit.findings().size(), run.get("results").size());
+        assertEquals(audit.artefacts().size(), run.get("results").size());
         Set<ArtefactKind> kinds = EnumSet.noneOf(ArtefactKind.class);
-        audit.findings().forEach(f -> kinds.add(f.kind()));
+        audit.artefacts().forEach(f -> kinds.add(f.kind()));
         assertEquals(EnumSet.allOf(ArtefactKind.class), kinds, "the policy and the planted artefacts give every kind");
         Set<String> ruleIds = new HashSet<>();
         run.at("/tool/driver/rules").forEach(r -> ruleIds.add(r.get("id").asText()));
@@ -91,15 +91,15 @@ class AuditSarifTest {
         List<String> lines = Files.readString(corpus, StandardCharsets.UTF_8).lines().toList();
         int located = 0;
         boolean suppressed = false;
-        for (int i = 0; i < audit.findings().size(); i++) {
-            AuditResult.Finding f = audit.findings().get(i);
+        for (int i = 0; i < audit.artefacts().size(); i++) {
+            AuditResult.Artefact f = audit.artefacts().get(i);
             JsonNode r = run.get("results").get(i);
             assertEquals(SarifRules.id(f.kind()), r.get("ruleId").asText());
             assertEquals(Map.of("high", "error", "medium", "warning", "low", "note").get(f.severity().key()),
                     r.get("level").asText());
             assertEquals(ArtefactIdentity.of(f).fingerprint(), r.get("partialFingerprints").get(SarifWriter.IDENTITY_KEY).asText());
             String message = r.at("/message/text").asText();
-            assertTrue(message.contains("'" + f.term() + "'") && message.contains("'" + f.label() + "'")
+            assertTrue(message.contains("'" + f.pattern() + "'") && message.contains("'" + f.label() + "'")
                     && message.contains(f.support() + " corpus documents"), message);
             suppressed |= f.suppressed() && r.at("/suppressions/0/justification").asText().equals(f.policyNote());
             List<String> exampleIds = f.examples().stream().limit(3).map(AuditResult.Example::id).toList();
@@ -116,10 +116,10 @@ class AuditSarifTest {
                 assertTrue(lines.get(line - 1).startsWith(id + ","), id + " at line " + line + ": " + lines.get(line - 1));
                 located++;
             }
-            assertEquals(exampleIds, logical, f.term());
+            assertEquals(exampleIds, logical, f.pattern());
         }
-        assertTrue(located >= audit.findings().size(), "most findings have example documents: " + located);
-        assertTrue(suppressed, "the accepted finding is suppressed with the reviewer's note");
+        assertTrue(located >= audit.artefacts().size(), "most artefacts have example documents: " + located);
+        assertTrue(suppressed, "the accepted artefact is suppressed with the reviewer's note");
 
         // report --sarif writes the same results from audit.json and the corpus.
         Path again = dir.resolve("again.sarif");

@@ -97,8 +97,8 @@ class BaselineAuditTest {
         assertEquals(ExitCodes.GATE, Main.run(audit(model, firstCorpus, firstOut)), "the planted artefacts fail the gate");
         Path baseline = firstOut.resolve("audit.json");
         AuditResult before = AuditJson.read(baseline);
-        assertFalse(before.findings().stream().anyMatch(f -> f.term().equals(NEW_VALUE)), "no dispatch header yet");
-        assertTrue(before.findings().stream().anyMatch(f -> f.term().equals("ledgerline.example")), "the reply address is found");
+        assertFalse(before.artefacts().stream().anyMatch(f -> f.termNames().contains(NEW_VALUE)), "no dispatch header yet");
+        assertTrue(before.artefacts().stream().anyMatch(f -> f.pattern().equals("ledgerline.example")), "the reply address is found");
 
         // A copy with one new planted artefact and without the reply address.
         Path secondCorpus = UtilityQueues.write(withDispatchHeader(withoutReplyAddress(first), 12), dir.resolve("mailbox-2.jsonl"));
@@ -116,12 +116,12 @@ class BaselineAuditTest {
         String printed = stdout.toString(StandardCharsets.UTF_8);
         assertEquals(ExitCodes.GATE, code, printed);
         Baseline.Comparison since = BaselineJson.section(secondOut.resolve("audit.json")).orElseThrow();
-        // The new header alone fails the gate (at the term level: its value and its field name).
-        List<Baseline.Entry> gate = since.gate(Severity.MEDIUM);
-        assertTrue(gate.stream().anyMatch(e -> e.identity().kind().equals("header") && e.identity().label().equals("outage")
-                && e.identity().pattern().contains(NEW_VALUE)), "gate: " + gate);
-        assertTrue(gate.stream().allMatch(e -> e.identity().pattern().contains(NEW_VALUE)
-                || e.identity().pattern().contains("dispatch")), "gate: " + gate);
+        // The new header field alone fails the gate: one artefact, the field with its value.
+        assertEquals(1, since.gate(Severity.MEDIUM).size(), "gate: " + since.added());
+        String gated = since.gate(Severity.MEDIUM).get(0).identity().pattern();
+        assertTrue(gated.startsWith("x-dispatch: ") && gated.contains(NEW_VALUE), "gate: " + since.added());
+        assertTrue(since.added().stream().anyMatch(e -> e.identity().kind().equals("header")
+                && e.identity().label().equals("outage") && e.identity().pattern().equals(gated)));
         // The old planted artefacts are unchanged; the reply address is resolved.
         for (String old : List.of("ivr7", "blq", "fernhill")) {
             assertTrue(patterns(since.unchanged()).stream().anyMatch(p -> p.contains(old)),
@@ -131,8 +131,8 @@ class BaselineAuditTest {
         assertFalse(patterns(since.unchanged()).stream().anyMatch(p -> p.contains("ledgerline.example")));
         Set<String> shown = new java.util.HashSet<>(patterns(since.added()));
         shown.addAll(patterns(since.unchanged()));
-        assertEquals(AuditJson.read(secondOut.resolve("audit.json")).findings().stream()
-                .map(f -> ArtefactIdentity.normalise(f.term())).collect(Collectors.toSet()), shown, "every finding has a state");
+        assertEquals(AuditJson.read(secondOut.resolve("audit.json")).artefacts().stream()
+                .map(f -> ArtefactIdentity.normalise(f.pattern())).collect(Collectors.toSet()), shown, "every artefact has a state");
 
         // The terminal, the report and the SARIF log say the same.
         assertTrue(printed.contains("since the baseline " + baseline + ": " + since.added().size() + " new, "

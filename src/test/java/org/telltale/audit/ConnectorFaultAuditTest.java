@@ -32,7 +32,7 @@ class ConnectorFaultAuditTest {
         Summary same = new Summary(s.documents(), s.explained(), s.labels(), s.accuracy(), s.skipped(), 0, s.model(),
                 s.corpus(), s.seed(), s.settings(), s.associationBasis(), s.prior(), s.predictedCounts(), s.zThreshold(),
                 s.termsTested(), s.pickCoverage(), 0);
-        return new AuditResult(same, r.findings(), r.scrub(), r.picks());
+        return new AuditResult(same, r.artefacts(), r.scrub(), r.picks(), r.terms());
     }
 
     @Test

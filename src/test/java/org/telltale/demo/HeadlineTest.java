@@ -1,13 +1,14 @@
 package org.telltale.demo;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
 
 import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.telltale.audit.ArtefactKind;
 import org.telltale.audit.AuditResult;
-import org.telltale.audit.AuditResult.Finding;
+import org.telltale.audit.AuditResult.Artefact;
 import org.telltale.audit.AuditResult.Scrub;
 import org.telltale.audit.AuditSettings;
 import org.telltale.audit.Severity;
@@ -15,62 +16,62 @@ import org.telltale.audit.Severity;
 class HeadlineTest {
 
     @Test
-    void corpusWideScrubGivesTheHoldoutAccuracyAfterScrubbing() {
-        // 500 held-out messages at 0.96 = 480 correct; the header scrub rewrote 100 of them,
-        // 98 correct before and 50 after, so 480 - 98 + 50 = 432 correct: 0.864 (hand computation).
+    void theAllAtOnceScrubLeadsWithTheHoldoutAccuracyAfterIt() {
+        // 500 held-out messages at 0.96 = 480 correct; removing all artefacts rewrote 150 of them,
+        // 147 correct before and 60 after, so 480 - 147 + 60 = 393 correct: 0.786 (hand computation).
+        List<Artefact> artefacts = List.of(artefact("route", Severity.HIGH, false), artefact("bil", Severity.HIGH, false),
+                artefact("casefile", Severity.MEDIUM, false), artefact("hello", Severity.LOW, true));
         AuditResult audit = audit(500, 0.96,
-                List.of(scrub(ArtefactKind.HEADER, "lines", "corpus", 100, 0.98, 0.50),
-                        scrub(ArtefactKind.BOILERPLATE, "lines", "corpus", 80, 0.95, 0.90)),
-                List.of(finding("route", Severity.HIGH, false), finding("bil", Severity.HIGH, false),
-                        finding("casefile", Severity.MEDIUM, false), finding("hello", Severity.LOW, true)));
+                List.of(scrub("header", "lines", "corpus", 100, 0.98, 0.50, 2),
+                        scrub("boilerplate", "lines", "corpus", 80, 0.95, 0.90, 1),
+                        scrub(AuditResult.ALL, "mixed", "corpus", 150, 0.98, 0.40, 3)),
+                artefacts);
         Headline h = Headline.of(audit);
-        assertEquals(0.864, h.accuracyAfter(), 1e-12);
-        assertEquals(0.096, h.accuracyDrop(), 1e-12);
-        assertEquals("holdout accuracy 0.96 → 0.86 once header lines are scrubbed; 3 artefact terms, 2 high", h.text());
+        assertEquals(0.786, h.accuracyAfter(), 1e-12);
+        assertEquals(0.174, h.accuracyDrop(), 1e-12);
+        assertEquals("holdout accuracy 0.96 → 0.79 once all 3 artefacts are removed; 3 artefacts, 2 high", h.text());
     }
 
     @Test
-    void theScrubThatCostsMostCorrectPredictionsLeadsNotTheSteepestOnAFewMessages() {
-        // 10 messages losing half their accuracy cost 5 correct predictions; 200 losing 0.1 cost 20.
-        AuditResult audit = audit(600, 0.9,
-                List.of(scrub(ArtefactKind.IDENTIFIER, "terms", "corpus", 10, 1.0, 0.5),
-                        scrub(ArtefactKind.BOILERPLATE, "lines", "corpus", 200, 0.9, 0.8)),
-                List.of());
+    void withoutAnAllAtOnceRowThereIsNothingToLeadWith() {
+        // A version 1 audit.json has per-kind rows only.
+        AuditResult audit = audit(600, 0.9, List.of(scrub("boilerplate", "lines", "corpus", 200, 0.9, 0.8, 1)), List.of());
         Headline h = Headline.of(audit);
-        assertEquals(ArtefactKind.BOILERPLATE, h.worst().kind());
-        assertEquals((540 - 180 + 160) / 600.0, h.accuracyAfter(), 1e-12);
+        assertNull(h.all());
+        assertEquals("holdout accuracy 0.90, no artefact to remove; 0 artefacts, 0 high", h.text());
     }
 
     @Test
     void explainedScopeSpeaksOfTheScrubbedMessagesOnly() {
-        AuditResult audit = audit(500, 0.96, List.of(scrub(ArtefactKind.IDENTIFIER, "terms", "explained", 40, 1.0, 0.75)),
-                List.of(finding("hr", Severity.HIGH, false)));
-        assertEquals("accuracy on the 40 scrubbed messages 1.00 → 0.75 once identifier terms are scrubbed; 1 artefact term, 1 high",
+        AuditResult audit = audit(500, 0.96, List.of(scrub(AuditResult.ALL, "matches", "explained", 40, 1.0, 0.75, 1)),
+                List.of(artefact("hr", Severity.HIGH, false)));
+        assertEquals("accuracy on the 40 scrubbed messages 1.00 → 0.75 once its artefact is removed; 1 artefact, 1 high",
                 Headline.of(audit).text());
     }
 
     @Test
-    void aCleanAuditSaysThereIsNothingToScrub() {
+    void aCleanAuditSaysThereIsNothingToRemove() {
         Headline h = Headline.of(audit(500, 0.81, List.of(), List.of()));
         assertEquals(0.0, h.accuracyDrop());
-        assertEquals("holdout accuracy 0.81, nothing to scrub; 0 artefact terms, 0 high", h.text());
+        assertEquals("holdout accuracy 0.81, no artefact to remove; 0 artefacts, 0 high", h.text());
     }
 
-    static AuditResult audit(long documents, double accuracy, List<Scrub> scrubs, List<Finding> findings) {
+    static AuditResult audit(long documents, double accuracy, List<Scrub> scrubs, List<Artefact> artefacts) {
         AuditSettings settings = new AuditSettings(60, 500, 10, 5, true, "never", 0.05, 64, "standard", null);
         AuditResult.Summary summary = new AuditResult.Summary(documents, 60, List.of("billing", "outage"), accuracy, 0, 0,
                 "model", "holdout.jsonl", 1, settings, "gold", Map.of("billing", 0.5, "outage", 0.5),
                 Map.of("billing", 250L, "outage", 250L), 4.2, 100, 0.8, 1000);
-        return new AuditResult(summary, findings, scrubs, List.of());
+        return new AuditResult(summary, artefacts, scrubs, List.of(), List.of());
     }
 
-    static Scrub scrub(ArtefactKind kind, String mode, String scope, int docs, double before, double after) {
-        return new Scrub(kind, mode, List.of("t"), scope, docs, docs / 2, 0.5, 0.3, before, after);
+    static Scrub scrub(String kind, String mode, String scope, int docs, double before, double after, int artefacts) {
+        return new Scrub(kind, mode, java.util.Collections.nCopies(artefacts, "header-0"), scope, docs, docs / 2, 0.5, 0.3,
+                before, after);
     }
 
-    static Finding finding(String term, Severity severity, boolean suppressed) {
-        return new Finding(term, ArtefactKind.HEADER, severity, "billing", 50, 1.0, 9.0, true, 9.0, 1.0, 1.0,
-                Map.of("billing", 50L), 0.4, 1.0, 10, suppressed, suppressed ? "accepted" : null, null, Map.of("header", 1.0),
-                3, 0.2, List.of());
+    static Artefact artefact(String term, Severity severity, boolean suppressed) {
+        return new Artefact("header-" + term, ArtefactKind.HEADER, severity, "billing", "X-Route: " + term, 50, 1.0, 9.0,
+                1.0, true, suppressed, suppressed ? "accepted" : null, null,
+                List.of(new AuditResult.ArtefactTerm(term, 1.0, 9.0, 0.4)), AuditResult.Effect.NONE, List.of());
     }
 }

@@ -3,9 +3,9 @@ package org.telltale.report.html;
 import java.util.List;
 
 /**
- * Everything the audit template shows, formatted: summary tiles, the scrub chart, the findings
- * with their evidence, the chart of importance against association, the picks and the browsable
- * documents.
+ * Everything the audit template shows, formatted: summary tiles, the scrub chart, the artefacts
+ * with their evidence, the chart of importance against association (every tested term; those of
+ * artefacts linked to them), the picks and the browsable documents.
  */
 public record AuditView(
         List<Tile> tiles,
@@ -27,12 +27,13 @@ public record AuditView(
     }
 
     /**
-     * One finding: table cells (display text and sort key) and the evidence section it links to.
+     * One artefact: table cells (display text and sort key) and the evidence section it links to.
      */
     public record FindingRow(
             int index,
             String anchor,
-            String term,
+            String pattern,
+            String terms,
             String kind,
             String severity,
             int severityRank,
@@ -50,12 +51,12 @@ public record AuditView(
             int moreContexts) {
     }
 
-    /** A labelled fact about a finding. */
+    /** A labelled fact about an artefact. */
     public record Fact(String name, String value) {
     }
 
     /**
-     * A window of an explained document around the finding's term, the term marked; links to the
+     * A window of an explained document around an artefact, every term of it marked; links to the
      * document view when that document is in the report.
      */
     public record Context(String docId, String docAnchor, boolean lead, boolean trail,
@@ -69,15 +70,23 @@ public record AuditView(
 
     public record ScrubRow(String kind, String mode, String y, String yAfter, String barHeight,
             String beforeWidth, String afterWidth, String before, String after, String flipRate, String scoreDrop,
-            int documents, int flips, String terms) {
+            int documents, int flips, String artefacts) {
     }
 
     public record Tick(String at, String label) {
     }
 
-    /** Findings placed by association (x) and importance (y); the z threshold as a rule. */
+    /**
+     * Tested terms placed by association (x) and importance (y); the z threshold as a rule. The
+     * terms of artefacts are points linked to their evidence; the rest a grey cloud.
+     */
     public record Scatter(int width, int height, String left, String right, String top, String bottom,
-            List<Tick> xTicks, List<Tick> yTicks, String threshold, String thresholdLabel, List<Point> points) {
+            List<Tick> xTicks, List<Tick> yTicks, String threshold, String thresholdLabel, List<Point> points,
+            List<CloudPoint> cloud) {
+    }
+
+    /** An unflagged term of the cloud. */
+    public record CloudPoint(String x, String y) {
     }
 
     public record Point(String anchor, String x, String y, String shape, String severity, boolean suppressed,

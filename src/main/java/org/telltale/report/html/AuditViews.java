@@ -1,7 +1,6 @@
 package org.telltale.report.html;
 
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -16,7 +15,7 @@ import org.telltale.text.Span;
 public final class AuditViews {
     /** Index rows shown per page of the document browser. */
     public static final int PAGE_SIZE = 50;
-    /** Documents quoted in context under each finding; the rest are counted and reachable in the browser. */
+    /** Documents quoted in context under each artefact; the rest are counted and reachable in the browser. */
     static final int CONTEXTS_PER_FINDING = 8;
     private static final int CONTEXT_CHARS = 70;
     private static final int SPANS_PER_CONTEXT_DOC = 2;
@@ -30,8 +29,8 @@ public final class AuditViews {
             byId.putIfAbsent(explanations.get(i).id(), i);
         }
         List<AuditView.FindingRow> findings = new ArrayList<>();
-        for (int i = 0; i < audit.findings().size(); i++) {
-            findings.add(finding(i, audit.findings().get(i), explanations, byId));
+        for (int i = 0; i < audit.artefacts().size(); i++) {
+            findings.add(finding(i, audit.artefacts().get(i), explanations, byId));
         }
         List<DocumentView> picks = new ArrayList<>();
         List<String> missing = new ArrayList<>();
@@ -48,7 +47,7 @@ public final class AuditViews {
         AuditResult.Summary s = audit.summary();
         return new AuditView(tiles(audit), VisibleText.inline(s.model()), VisibleText.inline(s.corpus()),
                 verdict(audit), ScrubCharts.of(audit.scrub()), findings, kinds(audit),
-                Scatters.of(findings, s.zThreshold()), picks, missing, index, documents, PAGE_SIZE);
+                Scatters.of(findings, audit, s.zThreshold()), picks, missing, index, documents, PAGE_SIZE);
     }
 
     /** The views of the browsable documents, anchored {@code doc-0}, {@code doc-1}, … */
@@ -76,8 +75,8 @@ public final class AuditViews {
 
     private static List<AuditView.Tile> tiles(AuditResult audit) {
         AuditResult.Summary s = audit.summary();
-        long open = audit.findings().stream().filter(f -> !f.suppressed()).count();
-        long suppressed = audit.findings().size() - open;
+        long open = audit.artefacts().stream().filter(f -> !f.suppressed()).count();
+        long suppressed = audit.artefacts().size() - open;
         List<AuditView.Tile> tiles = new ArrayList<>();
         tiles.add(new AuditView.Tile("documents scored", Long.toString(s.documents()),
                 s.skipped() == 0 ? "none skipped" : s.skipped() + " skipped as unreadable"));
@@ -85,7 +84,12 @@ public final class AuditViews {
                 s.documents() == 0 ? "" : Numbers.percent((double) s.explained() / s.documents()) + " of the corpus"));
         tiles.add(new AuditView.Tile("accuracy", s.accuracy() == null ? "n/a" : Numbers.percent(s.accuracy()),
                 s.accuracy() == null ? "no gold labels" : "prediction = gold label"));
-        tiles.add(new AuditView.Tile("open findings", Long.toString(open), severityBreakdown(audit)));
+        tiles.add(new AuditView.Tile("open artefacts", Long.toString(open), severityBreakdown(audit)));
+        audit.scrub().stream().filter(AuditResult.Scrub::all).findFirst()
+                .filter(x -> x.accuracyBefore() != null && x.accuracyAfter() != null)
+                .ifPresent(x -> tiles.add(new AuditView.Tile("without all artefacts",
+                        Numbers.percent(x.accuracyBefore()) + " → " + Numbers.percent(x.accuracyAfter()),
+                        "accuracy on the " + x.documents() + " " + x.scope() + " documents they touch")));
         tiles.add(new AuditView.Tile("suppressed", Long.toString(suppressed), "accepted by the policy"));
         tiles.add(new AuditView.Tile("labels", Integer.toString(s.labels().size()),
                 VisibleText.inline(String.join(", ", s.labels()))));
@@ -95,7 +99,7 @@ public final class AuditViews {
     private static String severityBreakdown(AuditResult audit) {
         List<String> parts = new ArrayList<>();
         for (Severity severity : Severity.values()) {
-            long n = audit.findings().stream().filter(f -> !f.suppressed() && f.severity() == severity).count();
+            long n = audit.artefacts().stream().filter(f -> !f.suppressed() && f.severity() == severity).count();
             if (n > 0) {
                 parts.add(n + " " + severity.key());
             }
@@ -104,32 +108,34 @@ public final class AuditViews {
     }
 
     private static String verdict(AuditResult audit) {
-        List<AuditResult.Finding> open = audit.open(Severity.LOW);
+        List<AuditResult.Artefact> open = audit.open(Severity.LOW);
         if (open.isEmpty()) {
-            return "No open finding: the audit found none of the artefacts it looks for. That is not a certificate.";
+            return "No open artefact: the audit found none of the artefacts it looks for. That is not a certificate.";
         }
-        long confirmed = open.stream().filter(AuditResult.Finding::confirmed).count();
-        return open.size() + (open.size() == 1 ? " open finding" : " open findings") + ", " + confirmed
-                + " confirmed by the scrub test: the model's predictions move when these terms are removed.";
+        long confirmed = open.stream().filter(AuditResult.Artefact::confirmed).count();
+        return open.size() + (open.size() == 1 ? " open artefact" : " open artefacts") + ", " + confirmed
+                + " confirmed by its own scrub: the model's predictions move when that artefact alone is removed.";
     }
 
     private static List<String> kinds(AuditResult audit) {
-        return audit.findings().stream().map(f -> f.kind().key()).distinct().sorted().toList();
+        return audit.artefacts().stream().map(f -> f.kind().key()).distinct().sorted().toList();
     }
 
-    private static AuditView.FindingRow finding(int i, AuditResult.Finding f, List<Explanation> explanations,
+    private static AuditView.FindingRow finding(int i, AuditResult.Artefact f, List<Explanation> explanations,
             Map<String, Integer> byId) {
-        List<AuditView.Fact> facts = List.of(
-                new AuditView.Fact("z against the prior", Numbers.plain(f.z(), 2)),
-                new AuditView.Fact("PMI (bits)", Numbers.plain(f.pmi(), 2)),
-                new AuditView.Fact("p̂(label | term)", Numbers.plain(f.pLabelGivenTerm(), 3)),
-                new AuditView.Fact("mean weight", Numbers.signed(f.meanWeight())),
-                new AuditView.Fact("sign consistency", Numbers.percent(f.signConsistency())),
-                new AuditView.Fact("selected in", f.selectedIn() + " explained documents"),
-                new AuditView.Fact("scrub", f.scrubFlips() + " flips, mean score drop " + Numbers.plain(f.scrubDrop(), 3)),
-                new AuditView.Fact("where it occurs", shares(f.kindShares())),
-                new AuditView.Fact("documents per label", counts(f.df())));
-        MarkedText.Mark mark = new MarkedText.Mark(0, f.meanWeight() >= 0, 4);
+        AuditResult.Effect scrub = f.scrub();
+        List<AuditView.Fact> facts = new ArrayList<>();
+        facts.add(new AuditView.Fact("id", f.id()));
+        facts.add(new AuditView.Fact("its own scrub", scrub.documents() + " documents rewritten without it, "
+                + scrub.flips() + " flipped, mean score drop " + Numbers.plain(scrub.scoreDrop(), 3)
+                + (scrub.accuracyBefore() == null || scrub.accuracyAfter() == null ? ""
+                        : ", accuracy " + Numbers.percent(scrub.accuracyBefore()) + " → " + Numbers.percent(scrub.accuracyAfter()))));
+        facts.add(new AuditView.Fact("p̂(label | strongest term)", Numbers.plain(f.pLabelGivenTerm(), 3)));
+        for (AuditResult.ArtefactTerm t : f.terms()) {
+            facts.add(new AuditView.Fact("term " + VisibleText.inline(t.term()), "importance " + Numbers.plain(t.importance(), 3)
+                    + ", z " + Numbers.plain(t.association(), 2) + ", mean weight " + Numbers.signed(t.weight())));
+        }
+        MarkedText.Mark mark = new MarkedText.Mark(0, true, 4);
         List<AuditView.Context> contexts = new ArrayList<>();
         int shown = 0;
         for (AuditResult.Example example : f.examples()) {
@@ -167,7 +173,8 @@ public final class AuditViews {
                 windows++;
             }
         }
-        return new AuditView.FindingRow(i, "finding-" + i, VisibleText.inline(f.term()), f.kind().key(),
+        return new AuditView.FindingRow(i, "finding-" + i, VisibleText.inline(f.pattern()),
+                VisibleText.inline(String.join(", ", f.termNames())), f.kind().key(),
                 f.severity().key(), f.severity().ordinal(), VisibleText.inline(f.label()), f.support(),
                 Numbers.plain(f.importance(), 3), f.importance(), Numbers.plain(f.association(), 2), f.association(),
                 f.confirmed(), f.suppressed(), VisibleText.inline(f.policyNote()), facts, contexts,
@@ -177,18 +184,6 @@ public final class AuditViews {
     /** Moves a cut off the middle of a surrogate pair, so no half character is shown. */
     private static int safeCut(String text, int at) {
         return at > 0 && at < text.length() && Character.isLowSurrogate(text.charAt(at)) ? at - 1 : at;
-    }
-
-    private static String shares(Map<String, Double> shares) {
-        return shares.entrySet().stream()
-                .sorted(Map.Entry.<String, Double>comparingByValue(Comparator.reverseOrder()))
-                .map(e -> VisibleText.inline(e.getKey()) + " " + Numbers.percent(e.getValue()))
-                .reduce((a, b) -> a + ", " + b).orElse("n/a");
-    }
-
-    private static String counts(Map<String, Long> counts) {
-        return counts.entrySet().stream().map(e -> VisibleText.inline(e.getKey()) + " " + e.getValue())
-                .reduce((a, b) -> a + ", " + b).orElse("n/a");
     }
 
     /** The SVG shape that stands for a kind, so kinds differ by form as well as by legend. */

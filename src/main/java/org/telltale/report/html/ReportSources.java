@@ -78,11 +78,7 @@ public final class ReportSources {
             throw new TelltaleException(from + ": format '" + format + "' is not " + AuditJson.FORMAT
                     + "; SARIF and comparisons are written from an audit's audit.json");
         }
-        try {
-            return AuditJson.read(from);
-        } catch (IOException e) {
-            throw new TelltaleException(from + ": cannot read: " + e.getMessage(), e);
-        }
+        return AuditJson.read(from);
     }
 
     /** The top-level {@code format} of the first JSON value in the file, or {@code null} if it has none. */

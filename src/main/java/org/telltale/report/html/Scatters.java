@@ -3,8 +3,13 @@ package org.telltale.report.html;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import org.telltale.audit.AuditResult;
 
-/** Geometry of the chart of importance (y) against association (x) for the findings. */
+/**
+ * Geometry of the chart of importance (y) against association (x) for every tested term: the terms
+ * of artefacts as points shaped by kind and linked to their artefact's evidence, the others as a
+ * grey cloud that shows where the flagged terms stand out from.
+ */
 final class Scatters {
     static final int WIDTH = 720;
     static final int HEIGHT = 380;
@@ -16,17 +21,21 @@ final class Scatters {
     private Scatters() {
     }
 
-    static AuditView.Scatter of(List<AuditView.FindingRow> findings, double zThreshold) {
+    static AuditView.Scatter of(List<AuditView.FindingRow> findings, AuditResult audit, double zThreshold) {
+        java.util.Map<String, AuditView.FindingRow> rowOf = new java.util.HashMap<>();
+        for (int i = 0; i < findings.size(); i++) {
+            rowOf.put(audit.artefacts().get(i).id(), findings.get(i));
+        }
         double xLow = 0;
         double xHigh = Double.isFinite(zThreshold) ? zThreshold : 1;
         double yHigh = 0;
-        for (AuditView.FindingRow f : findings) {
-            if (Double.isFinite(f.associationValue())) {
-                xLow = Math.min(xLow, f.associationValue());
-                xHigh = Math.max(xHigh, f.associationValue());
+        for (AuditResult.TermStat t : audit.terms()) {
+            if (Double.isFinite(t.association())) {
+                xLow = Math.min(xLow, t.association());
+                xHigh = Math.max(xHigh, t.association());
             }
-            if (Double.isFinite(f.importanceValue())) {
-                yHigh = Math.max(yHigh, f.importanceValue());
+            if (Double.isFinite(t.importance())) {
+                yHigh = Math.max(yHigh, t.importance());
             }
         }
         NiceScale x = NiceScale.of(xLow, xHigh * 1.05, 6);
@@ -39,23 +48,38 @@ final class Scatters {
         for (double t : y.ticks()) {
             yTicks.add(new AuditView.Tick(Numbers.coord(y.map(t, BOTTOM, TOP)), label(t, y.step())));
         }
-        List<AuditView.FindingRow> byImportance = new ArrayList<>(findings);
-        byImportance.sort(Comparator.comparingDouble(AuditView.FindingRow::importanceValue).reversed());
-        List<AuditView.FindingRow> labelled = byImportance.subList(0, Math.min(LABELLED_LIMIT, byImportance.size()));
+        List<AuditResult.TermStat> flagged = new ArrayList<>();
+        List<AuditView.CloudPoint> cloud = new ArrayList<>();
+        for (AuditResult.TermStat t : audit.terms()) {
+            if (t.artefact() != null && rowOf.containsKey(t.artefact())) {
+                flagged.add(t);
+            } else {
+                cloud.add(new AuditView.CloudPoint(Numbers.coord(x.map(finite(t.association()), LEFT, RIGHT)),
+                        Numbers.coord(y.map(finite(t.importance()), BOTTOM, TOP))));
+            }
+        }
+        List<AuditResult.TermStat> byImportance = new ArrayList<>(flagged);
+        byImportance.sort(Comparator.comparingDouble((AuditResult.TermStat t) -> finite(t.importance())).reversed());
+        List<AuditResult.TermStat> labelled = byImportance.subList(0, Math.min(LABELLED_LIMIT, byImportance.size()));
         List<AuditView.Point> points = new ArrayList<>();
-        for (AuditView.FindingRow f : findings) {
-            double fx = Double.isFinite(f.associationValue()) ? f.associationValue() : 0;
-            double fy = Double.isFinite(f.importanceValue()) ? f.importanceValue() : 0;
-            String tip = f.term() + " (" + f.kind() + ", " + f.severity() + ", " + f.label() + "): importance "
-                    + f.importance() + ", association " + f.association();
-            points.add(new AuditView.Point(f.anchor(), Numbers.coord(x.map(fx, LEFT, RIGHT)),
-                    Numbers.coord(y.map(fy, BOTTOM, TOP)), AuditViews.shape(f.kind()), f.severity(), f.suppressed(),
-                    f.term(), tip, labelled.contains(f)));
+        for (AuditResult.TermStat t : flagged) {
+            AuditView.FindingRow f = rowOf.get(t.artefact());
+            String term = VisibleText.inline(t.term());
+            String tip = term + " of " + f.pattern() + " (" + f.kind() + ", " + f.severity() + ", " + f.label()
+                    + "): importance " + Numbers.plain(t.importance(), 3) + ", association "
+                    + Numbers.plain(t.association(), 2);
+            points.add(new AuditView.Point(f.anchor(), Numbers.coord(x.map(finite(t.association()), LEFT, RIGHT)),
+                    Numbers.coord(y.map(finite(t.importance()), BOTTOM, TOP)), AuditViews.shape(f.kind()), f.severity(),
+                    f.suppressed(), term, tip, labelled.contains(t)));
         }
         String threshold = Double.isFinite(zThreshold) ? Numbers.coord(x.map(zThreshold, LEFT, RIGHT)) : null;
         return new AuditView.Scatter(WIDTH, HEIGHT, Numbers.coord(LEFT), Numbers.coord(RIGHT), Numbers.coord(TOP),
                 Numbers.coord(BOTTOM), xTicks, yTicks, threshold,
-                Double.isFinite(zThreshold) ? "z threshold " + Numbers.plain(zThreshold, 2) : "", points);
+                Double.isFinite(zThreshold) ? "z threshold " + Numbers.plain(zThreshold, 2) : "", points, cloud);
+    }
+
+    private static double finite(double v) {
+        return Double.isFinite(v) ? v : 0;
     }
 
     private static final int LABELLED_LIMIT = 12;

@@ -5,7 +5,7 @@ import java.util.List;
 import org.telltale.audit.AuditResult;
 
 /**
- * Geometry of the scrub chart: per kind, a bar before and a bar after the rewrite. The measure is
+ * Geometry of the scrub chart: per kind and for all artefacts at once, a bar before and a bar after the rewrite. The measure is
  * accuracy where gold labels exist; otherwise the share of documents that keep their predicted
  * label (all of them before the rewrite, 1 − flip rate after).
  */
@@ -29,11 +29,11 @@ final class ScrubCharts {
             double before = accuracy ? s.accuracyBefore() : 1.0;
             double after = accuracy ? s.accuracyAfter() : 1.0 - s.flipRate();
             int y = TOP + i * ROW;
-            rows.add(new AuditView.ScrubRow(s.kind().key(), s.mode(), Integer.toString(y),
+            rows.add(new AuditView.ScrubRow(s.all() ? "all at once" : s.kind(), s.mode(), Integer.toString(y),
                     Integer.toString(y + BAR + 2), Integer.toString(BAR), width(before), width(after),
                     Numbers.percent(before), Numbers.percent(after), Numbers.percent(s.flipRate()),
                     Numbers.plain(s.scoreDrop(), 3), s.documents(), s.flips(),
-                    VisibleText.inline(String.join(", ", s.terms()))));
+                    s.artefacts().size() + (s.artefacts().size() == 1 ? " artefact" : " artefacts")));
         }
         List<AuditView.Tick> ticks = new ArrayList<>();
         for (int p = 0; p <= 100; p += 25) {

@@ -1,7 +1,6 @@
 package org.telltale.report.json;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -11,32 +10,37 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.telltale.TelltaleException;
+import org.telltale.audit.ArtefactIdentity;
 import org.telltale.audit.ArtefactKind;
 import org.telltale.audit.AuditResult;
+import org.telltale.audit.AuditResult.Artefact;
+import org.telltale.audit.AuditResult.ArtefactTerm;
+import org.telltale.audit.AuditResult.Effect;
 import org.telltale.audit.AuditResult.Example;
-import org.telltale.audit.AuditResult.Finding;
 import org.telltale.audit.AuditResult.Scrub;
 import org.telltale.audit.AuditResult.Summary;
+import org.telltale.audit.AuditResult.TermStat;
 import org.telltale.audit.AuditSettings;
 import org.telltale.audit.Severity;
+import org.telltale.json.JsonValue;
 import org.telltale.text.Span;
 
 /**
- * Writes and reads the {@code telltale.audit} v1 contract:
- * {@code {"format":"telltale.audit","version":1,"summary":{…},"findings":[…],"scrub":[…],"picks":[…]}}.
+ * Writes the {@code telltale.audit} v2 contract and reads v2 and v1:
+ * {@code {"format":"telltale.audit","version":2,"summary":{…},"artefacts":[…],"scrub":[…],"picks":[…],"terms":[…]}}.
  * Field names are snake_case; numbers that are not finite are written as {@code null} and read
- * back as NaN; a missing required field is an error naming the field and its place.
+ * back as NaN. Reading goes through the strict {@link JsonValue}: a missing or mistyped field is
+ * an error naming the file and its path, a version this Telltale does not read names the version.
+ * A v1 file (one finding per term) reads as one artefact per finding, its pattern the term.
  *
  * <p>Stateless and thread-safe.
  */
 public final class AuditJson {
     public static final String FORMAT = "telltale.audit";
-    public static final int VERSION = 1;
+    public static final int VERSION = 2;
 
     private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
@@ -48,14 +52,9 @@ public final class AuditJson {
         Files.writeString(file, toJson(result) + "\n", StandardCharsets.UTF_8);
     }
 
-    /** Reads the audit in {@code file}; errors name the file. */
-    public static AuditResult read(Path file) throws IOException {
-        String json = Files.readString(file, StandardCharsets.UTF_8);
-        try {
-            return fromJson(json);
-        } catch (TelltaleException e) {
-            throw new TelltaleException(file + ": " + e.getMessage(), e);
-        }
+    /** Reads the audit in {@code file} (version 1 or 2); errors name the file. */
+    public static AuditResult read(Path file) {
+        return read(JsonValue.read(file));
     }
 
     /** The JSON text of {@code result}, indented. */
@@ -76,39 +75,36 @@ public final class AuditJson {
         }
     }
 
+    /** Parses the JSON text of an audit; {@code source} names it in errors. */
+    public static AuditResult fromJson(String json, String source) {
+        return read(JsonValue.parse(json, source));
+    }
+
     /** Parses the JSON text of an audit. */
     public static AuditResult fromJson(String json) {
-        JsonNode root;
-        try {
-            root = MAPPER.readTree(json);
-        } catch (JsonProcessingException e) {
-            throw new TelltaleException("not valid JSON: " + e.getOriginalMessage()
-                    + " at line " + e.getLocation().getLineNr() + ", column " + e.getLocation().getColumnNr());
+        return fromJson(json, "audit.json");
+    }
+
+    private static AuditResult read(JsonValue root) {
+        root.requireObject();
+        int version = root.version(FORMAT, 1, 2);
+        Summary summary = summary(root.object("summary"));
+        if (version == 1) {
+            return V1.read(root, summary);
         }
-        if (root == null || !root.isObject()) {
-            throw new TelltaleException("an audit must be a JSON object");
-        }
-        String format = root.path("format").asText("");
-        if (!FORMAT.equals(format)) {
-            throw new TelltaleException("format is '" + format + "', expected '" + FORMAT + "'");
-        }
-        int version = root.path("version").asInt(-1);
-        if (version != VERSION) {
-            throw new TelltaleException("version " + version + " of " + FORMAT + " is not supported (expected " + VERSION + ")");
-        }
-        Summary summary = summary(required(root, "summary", ""));
-        List<Finding> findings = new ArrayList<>();
-        JsonNode fs = required(root, "findings", "");
-        for (int i = 0; i < fs.size(); i++) {
-            findings.add(finding(fs.get(i), "findings[" + i + "]"));
+        List<Artefact> artefacts = new ArrayList<>();
+        for (JsonValue a : root.array("artefacts")) {
+            artefacts.add(artefact(a));
         }
         List<Scrub> scrub = new ArrayList<>();
-        JsonNode ss = required(root, "scrub", "");
-        for (int i = 0; i < ss.size(); i++) {
-            scrub.add(scrub(ss.get(i), "scrub[" + i + "]"));
+        for (JsonValue s : root.array("scrub")) {
+            scrub.add(scrub(s));
         }
-        List<String> picks = strings(required(root, "picks", ""));
-        return new AuditResult(summary, findings, scrub, picks);
+        List<TermStat> terms = new ArrayList<>();
+        for (JsonValue t : root.array("terms")) {
+            terms.add(term(t));
+        }
+        return new AuditResult(summary, artefacts, scrub, root.strings("picks"), terms);
     }
 
     // ---- writing
@@ -118,12 +114,14 @@ public final class AuditJson {
         root.put("format", FORMAT);
         root.put("version", VERSION);
         root.set("summary", summaryTree(result.summary()));
-        ArrayNode findings = root.putArray("findings");
-        result.findings().forEach(f -> findings.add(findingTree(f)));
+        ArrayNode artefacts = root.putArray("artefacts");
+        result.artefacts().forEach(a -> artefacts.add(artefactTree(a)));
         ArrayNode scrub = root.putArray("scrub");
         result.scrub().forEach(s -> scrub.add(scrubTree(s)));
         ArrayNode picks = root.putArray("picks");
         result.picks().forEach(picks::add);
+        ArrayNode terms = root.putArray("terms");
+        result.terms().forEach(t -> terms.add(termTree(t)));
         return root;
     }
 
@@ -167,33 +165,32 @@ public final class AuditJson {
         return o;
     }
 
-    private static ObjectNode findingTree(Finding f) {
+    private static ObjectNode artefactTree(Artefact a) {
         ObjectNode o = MAPPER.createObjectNode();
-        o.put("term", f.term());
-        o.put("kind", f.kind().key());
-        o.put("severity", f.severity().key());
-        o.put("label", f.label());
-        o.put("support", f.support());
-        putNumber(o, "importance", f.importance());
-        putNumber(o, "association", f.association());
-        o.put("confirmed", f.confirmed());
-        putNumber(o, "z", f.z());
-        putNumber(o, "pmi", f.pmi());
-        putNumber(o, "p_label_given_term", f.pLabelGivenTerm());
-        ObjectNode df = o.putObject("df");
-        f.df().forEach(df::put);
-        putNumber(o, "mean_weight", f.meanWeight());
-        putNumber(o, "sign_consistency", f.signConsistency());
-        o.put("selected_in", f.selectedIn());
-        o.put("suppressed", f.suppressed());
-        o.put("policy", f.policy());
-        o.put("policy_note", f.policyNote());
-        ObjectNode shares = o.putObject("kind_shares");
-        f.kindShares().forEach((k, v) -> putNumber(shares, k, v));
-        o.put("scrub_flips", f.scrubFlips());
-        putNumber(o, "scrub_drop", f.scrubDrop());
+        o.put("id", a.id());
+        o.put("kind", a.kind().key());
+        o.put("severity", a.severity().key());
+        o.put("label", a.label());
+        o.put("pattern", a.pattern());
+        o.put("support", a.support());
+        putNumber(o, "importance", a.importance());
+        putNumber(o, "association", a.association());
+        putNumber(o, "p_label_given_term", a.pLabelGivenTerm());
+        o.put("confirmed", a.confirmed());
+        o.put("suppressed", a.suppressed());
+        o.put("policy", a.policy());
+        o.put("policy_note", a.policyNote());
+        ArrayNode terms = o.putArray("terms");
+        for (ArtefactTerm t : a.terms()) {
+            ObjectNode x = terms.addObject();
+            x.put("term", t.term());
+            putNumber(x, "importance", t.importance());
+            putNumber(x, "association", t.association());
+            putNumber(x, "weight", t.weight());
+        }
+        o.set("scrub", effectTree(a.scrub()));
         ArrayNode examples = o.putArray("examples");
-        for (Example e : f.examples()) {
+        for (Example e : a.examples()) {
             ObjectNode x = examples.addObject();
             x.put("id", e.id());
             ArrayNode spans = x.putArray("spans");
@@ -204,12 +201,23 @@ public final class AuditJson {
         return o;
     }
 
+    private static ObjectNode effectTree(Effect e) {
+        ObjectNode o = MAPPER.createObjectNode();
+        o.put("documents", e.documents());
+        o.put("flips", e.flips());
+        putNumber(o, "flip_rate", e.flipRate());
+        putNumber(o, "score_drop", e.scoreDrop());
+        putNullable(o, "accuracy_before", e.accuracyBefore());
+        putNullable(o, "accuracy_after", e.accuracyAfter());
+        return o;
+    }
+
     private static ObjectNode scrubTree(Scrub s) {
         ObjectNode o = MAPPER.createObjectNode();
-        o.put("kind", s.kind().key());
+        o.put("kind", s.kind());
         o.put("mode", s.mode());
-        ArrayNode terms = o.putArray("terms");
-        s.terms().forEach(terms::add);
+        ArrayNode ids = o.putArray("artefacts");
+        s.artefacts().forEach(ids::add);
         o.put("scope", s.scope());
         o.put("documents", s.documents());
         o.put("flips", s.flips());
@@ -217,6 +225,21 @@ public final class AuditJson {
         putNumber(o, "score_drop", s.scoreDrop());
         putNullable(o, "accuracy_before", s.accuracyBefore());
         putNullable(o, "accuracy_after", s.accuracyAfter());
+        return o;
+    }
+
+    private static ObjectNode termTree(TermStat t) {
+        ObjectNode o = MAPPER.createObjectNode();
+        o.put("term", t.term());
+        o.put("label", t.label());
+        o.put("kind", t.kind().key());
+        o.put("support", t.support());
+        putNumber(o, "importance", t.importance());
+        putNumber(o, "association", t.association());
+        putNumber(o, "pmi", t.pmi());
+        putNumber(o, "weight", t.weight());
+        o.put("selected_in", t.selectedIn());
+        o.put("artefact", t.artefact());
         return o;
     }
 
@@ -238,178 +261,169 @@ public final class AuditJson {
 
     // ---- reading
 
-    private static Summary summary(JsonNode o) {
-        String at = "summary";
+    private static Summary summary(JsonValue o) {
         return new Summary(
-                longOf(o, "documents", at),
-                intOf(o, "explained", at),
-                strings(required(o, "labels", at)),
-                nullableDouble(o, "accuracy", at),
-                longOf(o, "skipped", at),
-                longOf(o, "retries", at),
-                textOf(o, "model", at),
-                textOf(o, "corpus", at),
-                longOf(o, "seed", at),
-                settings(required(o, "settings", at)),
-                textOf(o, "association_basis", at),
-                doubles(required(o, "prior", at)),
-                longs(required(o, "predicted_counts", at)),
-                doubleOf(o, "z_threshold", at),
-                intOf(o, "terms_tested", at),
-                doubleOf(o, "pick_coverage", at),
-                longOf(o, "elapsed_ms", at));
+                o.integer("documents"),
+                o.int32("explained"),
+                o.strings("labels"),
+                nullable(o, "accuracy"),
+                o.integer("skipped"),
+                o.integer("retries"),
+                o.string("model"),
+                o.string("corpus"),
+                o.integer("seed"),
+                settings(o.object("settings")),
+                o.string("association_basis"),
+                numbers(o.object("prior")),
+                integers(o.object("predicted_counts")),
+                number(o, "z_threshold"),
+                o.int32("terms_tested"),
+                number(o, "pick_coverage"),
+                o.integer("elapsed_ms"));
     }
 
-    private static AuditSettings settings(JsonNode o) {
-        String at = "summary.settings";
-        return new AuditSettings(
-                intOf(o, "sample", at),
-                intOf(o, "probes", at),
-                intOf(o, "words", at),
-                intOf(o, "picks", at),
-                required(o, "scrub_all", at).asBoolean(),
-                textOf(o, "fail_on", at),
-                doubleOf(o, "alpha", at),
-                intOf(o, "batch", at),
-                textOf(o, "analyzer", at),
-                nullableText(o, "policy", at));
+    private static AuditSettings settings(JsonValue o) {
+        try {
+            return new AuditSettings(o.int32("sample"), o.int32("probes"), o.int32("words"), o.int32("picks"),
+                    o.bool("scrub_all"), o.string("fail_on"), o.number("alpha"), o.int32("batch"), o.string("analyzer"),
+                    o.optionalString("policy"));
+        } catch (IllegalArgumentException e) {
+            throw o.here(e.getMessage());
+        }
     }
 
-    private static Finding finding(JsonNode o, String at) {
+    private static Artefact artefact(JsonValue o) {
+        List<ArtefactTerm> terms = new ArrayList<>();
+        for (JsonValue t : o.array("terms")) {
+            terms.add(new ArtefactTerm(t.string("term"), number(t, "importance"), number(t, "association"),
+                    number(t, "weight")));
+        }
+        Artefact a = new Artefact(o.string("id"), kind(o, "kind"), severity(o), o.string("label"), o.string("pattern"),
+                o.integer("support"), number(o, "importance"), number(o, "association"),
+                number(o, "p_label_given_term"), o.bool("confirmed"), o.bool("suppressed"), o.optionalString("policy"),
+                o.optionalString("policy_note"), terms, effect(o.object("scrub")), examples(o));
+        return a;
+    }
+
+    private static Effect effect(JsonValue o) {
+        return new Effect(o.int32("documents"), o.int32("flips"), number(o, "flip_rate"), number(o, "score_drop"),
+                nullable(o, "accuracy_before"), nullable(o, "accuracy_after"));
+    }
+
+    static List<Example> examples(JsonValue o) {
         List<Example> examples = new ArrayList<>();
-        JsonNode xs = required(o, "examples", at);
-        for (int i = 0; i < xs.size(); i++) {
-            JsonNode x = xs.get(i);
-            String xat = at + ".examples[" + i + "]";
+        for (JsonValue x : o.array("examples")) {
             List<Span> spans = new ArrayList<>();
-            for (JsonNode s : required(x, "spans", xat)) {
-                spans.add(new Span(intOf(s, "start", xat), intOf(s, "end", xat)));
+            for (JsonValue s : x.array("spans")) {
+                int start = s.int32("start");
+                int end = s.int32("end");
+                if (start < 0 || end < start) {
+                    throw s.here("expected 0 <= start <= end");
+                }
+                spans.add(new Span(start, end));
             }
-            examples.add(new Example(textOf(x, "id", xat), spans));
+            examples.add(new Example(x.string("id"), spans));
         }
+        return examples;
+    }
+
+    private static Scrub scrub(JsonValue o) {
+        String kind = o.string("kind");
+        if (!AuditResult.ALL.equals(kind)) {
+            kind(o, "kind");
+        }
+        return new Scrub(kind, o.string("mode"), o.strings("artefacts"), o.string("scope"), o.int32("documents"),
+                o.int32("flips"), number(o, "flip_rate"), number(o, "score_drop"), nullable(o, "accuracy_before"),
+                nullable(o, "accuracy_after"));
+    }
+
+    private static TermStat term(JsonValue o) {
+        return new TermStat(o.string("term"), o.string("label"), kind(o, "kind"), o.integer("support"),
+                number(o, "importance"), number(o, "association"), number(o, "pmi"), number(o, "weight"),
+                o.int32("selected_in"), o.optionalString("artefact"));
+    }
+
+    static ArtefactKind kind(JsonValue o, String field) {
         try {
-            return new Finding(
-                    textOf(o, "term", at),
-                    ArtefactKind.fromKey(textOf(o, "kind", at)),
-                    Severity.fromKey(textOf(o, "severity", at)),
-                    textOf(o, "label", at),
-                    longOf(o, "support", at),
-                    doubleOf(o, "importance", at),
-                    doubleOf(o, "association", at),
-                    required(o, "confirmed", at).asBoolean(),
-                    doubleOf(o, "z", at),
-                    doubleOf(o, "pmi", at),
-                    doubleOf(o, "p_label_given_term", at),
-                    longs(required(o, "df", at)),
-                    doubleOf(o, "mean_weight", at),
-                    doubleOf(o, "sign_consistency", at),
-                    intOf(o, "selected_in", at),
-                    required(o, "suppressed", at).asBoolean(),
-                    nullableText(o, "policy", at),
-                    nullableText(o, "policy_note", at),
-                    doubles(required(o, "kind_shares", at)),
-                    intOf(o, "scrub_flips", at),
-                    doubleOf(o, "scrub_drop", at),
-                    examples);
+            return ArtefactKind.fromKey(o.string(field));
         } catch (IllegalArgumentException e) {
-            throw new TelltaleException(at + ": " + e.getMessage());
+            throw o.at(field, e.getMessage());
         }
     }
 
-    private static Scrub scrub(JsonNode o, String at) {
+    static Severity severity(JsonValue o) {
         try {
-            return new Scrub(
-                    ArtefactKind.fromKey(textOf(o, "kind", at)),
-                    textOf(o, "mode", at),
-                    strings(required(o, "terms", at)),
-                    textOf(o, "scope", at),
-                    intOf(o, "documents", at),
-                    intOf(o, "flips", at),
-                    doubleOf(o, "flip_rate", at),
-                    doubleOf(o, "score_drop", at),
-                    nullableDouble(o, "accuracy_before", at),
-                    nullableDouble(o, "accuracy_after", at));
+            return Severity.fromKey(o.string("severity"));
         } catch (IllegalArgumentException e) {
-            throw new TelltaleException(at + ": " + e.getMessage());
+            throw o.at("severity", e.getMessage());
         }
     }
 
-    private static JsonNode required(JsonNode o, String name, String at) {
-        JsonNode v = o.get(name);
-        if (v == null) {
-            throw new TelltaleException("missing field '" + name + "'" + (at.isEmpty() ? "" : " in " + at));
+    /** A number that must be present and may be {@code null} (written for a value that is not finite): NaN then. */
+    static double number(JsonValue o, String field) {
+        Double v = nullable(o, field);
+        return v == null ? Double.NaN : v;
+    }
+
+    /** A number that must be present and may be {@code null}. */
+    static Double nullable(JsonValue o, String field) {
+        if (!o.node().has(field)) {
+            throw o.at(field, "missing");
         }
-        return v;
+        return o.optionalNumber(field);
     }
 
-    private static String textOf(JsonNode o, String name, String at) {
-        JsonNode v = required(o, name, at);
-        if (!v.isTextual()) {
-            throw new TelltaleException("field '" + name + "' in " + at + " must be a string");
-        }
-        return v.asText();
-    }
-
-    private static String nullableText(JsonNode o, String name, String at) {
-        JsonNode v = o.get(name);
-        return v == null || v.isNull() ? null : textOf(o, name, at);
-    }
-
-    private static long longOf(JsonNode o, String name, String at) {
-        JsonNode v = required(o, name, at);
-        if (!v.canConvertToLong() || !v.isIntegralNumber()) {
-            throw new TelltaleException("field '" + name + "' in " + at + " must be an integer");
-        }
-        return v.asLong();
-    }
-
-    private static int intOf(JsonNode o, String name, String at) {
-        long v = longOf(o, name, at);
-        if (v < Integer.MIN_VALUE || v > Integer.MAX_VALUE) {
-            throw new TelltaleException("field '" + name + "' in " + at + " is out of range: " + v);
-        }
-        return (int) v;
-    }
-
-    private static double doubleOf(JsonNode o, String name, String at) {
-        JsonNode v = required(o, name, at);
-        if (v.isNull()) {
-            return Double.NaN;
-        }
-        if (!v.isNumber()) {
-            throw new TelltaleException("field '" + name + "' in " + at + " must be a number");
-        }
-        return v.asDouble();
-    }
-
-    private static Double nullableDouble(JsonNode o, String name, String at) {
-        JsonNode v = o.get(name);
-        return v == null || v.isNull() ? null : doubleOf(o, name, at);
-    }
-
-    private static List<String> strings(JsonNode array) {
-        List<String> out = new ArrayList<>();
-        for (JsonNode v : array) {
-            out.add(v.asText());
-        }
-        return out;
-    }
-
-    private static Map<String, Double> doubles(JsonNode object) {
+    static Map<String, Double> numbers(JsonValue o) {
         Map<String, Double> out = new LinkedHashMap<>();
-        for (Iterator<Map.Entry<String, JsonNode>> it = object.fields(); it.hasNext(); ) {
-            Map.Entry<String, JsonNode> e = it.next();
-            out.put(e.getKey(), e.getValue().isNull() ? Double.NaN : e.getValue().asDouble());
-        }
+        o.fields().forEach((k, v) -> out.put(k, v.node().isNull() ? Double.NaN : v.asNumber()));
         return out;
     }
 
-    private static Map<String, Long> longs(JsonNode object) {
+    static Map<String, Long> integers(JsonValue o) {
         Map<String, Long> out = new LinkedHashMap<>();
-        for (Iterator<Map.Entry<String, JsonNode>> it = object.fields(); it.hasNext(); ) {
-            Map.Entry<String, JsonNode> e = it.next();
-            out.put(e.getKey(), e.getValue().asLong());
-        }
+        o.fields().forEach((k, v) -> out.put(k, v.asInteger()));
         return out;
+    }
+
+    /**
+     * Version 1: one finding per (term, label). Each reads as an artefact of that one term, its
+     * pattern the term, its id from its identity as in version 2; its scrub fields
+     * ({@code scrub_flips}, {@code scrub_drop}) were of its label's terms removed together, and
+     * version 1 kept no document count for them (0 here). Scrub rows name the artefacts of
+     * their kind; there is no all-at-once row and no per-term cloud beyond the findings.
+     */
+    private static final class V1 {
+        static AuditResult read(JsonValue root, Summary summary) {
+            List<Artefact> artefacts = new ArrayList<>();
+            List<TermStat> terms = new ArrayList<>();
+            for (JsonValue f : root.array("findings")) {
+                String term = f.string("term");
+                ArtefactKind kind = kind(f, "kind");
+                String label = f.string("label");
+                String id = kind.key() + "-" + ArtefactIdentity.of(kind, label, term).fingerprint().substring(0, 12);
+                double importance = number(f, "importance");
+                double z = number(f, "z");
+                double weight = number(f, "mean_weight");
+                int flips = f.int32("scrub_flips");
+                Effect effect = new Effect(0, flips, Double.NaN, number(f, "scrub_drop"), null, null);
+                artefacts.add(new Artefact(id, kind, severity(f), label, term, f.integer("support"), importance,
+                        number(f, "association"), number(f, "p_label_given_term"), f.bool("confirmed"),
+                        f.bool("suppressed"), f.optionalString("policy"), f.optionalString("policy_note"),
+                        List.of(new ArtefactTerm(term, importance, z, weight)), effect, examples(f)));
+                terms.add(new TermStat(term, label, kind, f.integer("support"), importance, z, number(f, "pmi"), weight,
+                        f.int32("selected_in"), id));
+            }
+            List<Scrub> scrub = new ArrayList<>();
+            for (JsonValue s : root.array("scrub")) {
+                ArtefactKind kind = kind(s, "kind");
+                List<String> ids = artefacts.stream().filter(a -> a.kind() == kind && !a.suppressed())
+                        .map(Artefact::id).toList();
+                s.strings("terms");
+                scrub.add(new Scrub(kind.key(), s.string("mode"), ids, s.string("scope"), s.int32("documents"),
+                        s.int32("flips"), number(s, "flip_rate"), number(s, "score_drop"),
+                        nullable(s, "accuracy_before"), nullable(s, "accuracy_after")));
+            }
+            return new AuditResult(summary, artefacts, scrub, root.strings("picks"), terms);
+        }
     }
 }

@@ -11,7 +11,7 @@ import org.telltale.audit.ArtefactIdentity;
 import org.telltale.audit.Baseline;
 import org.telltale.audit.ArtefactKind;
 import org.telltale.audit.AuditResult;
-import org.telltale.audit.AuditResult.Finding;
+import org.telltale.audit.AuditResult.Artefact;
 import org.telltale.audit.AuditSettings;
 import org.telltale.audit.Severity;
 import org.telltale.report.sarif.SarifLog.Level;
@@ -20,10 +20,10 @@ import org.telltale.report.sarif.SarifLog.Result;
 import org.telltale.report.sarif.SarifLog.Rule;
 
 /**
- * An audit as a SARIF log: a rule per artefact kind that occurs, a result per finding with its
- * level from the severity, a message naming pattern, label, support and scrub result, the corpus
- * lines of a few example documents, and the finding's {@link ArtefactIdentity} as its partial
- * fingerprint; the run's settings in the run's property bag.
+ * An audit as a SARIF log: a rule per artefact kind that occurs, a result per artefact with its
+ * level from the severity, a message naming pattern, label, support and its own scrub result, the
+ * corpus lines of a few example documents, and the artefact's {@link ArtefactIdentity} as its
+ * partial fingerprint; the run's settings in the run's property bag.
  */
 public final class AuditSarif {
     /** Example documents given as locations per result; viewers show the first as the place. */
@@ -51,10 +51,10 @@ public final class AuditSarif {
     public static SarifLog of(AuditResult audit, String version, String corpusUri, Map<String, Location> places,
             Baseline.Comparison since) {
         Set<ArtefactKind> kinds = EnumSet.noneOf(ArtefactKind.class);
-        audit.findings().forEach(f -> kinds.add(f.kind()));
+        audit.artefacts().forEach(f -> kinds.add(f.kind()));
         List<Rule> rules = kinds.stream().map(SarifRules::of).toList();
         List<Result> results = new ArrayList<>();
-        for (Finding f : audit.findings()) {
+        for (Artefact f : audit.artefacts()) {
             results.add(result(f, corpusUri, places, since));
         }
         String corpus = audit.summary().corpus();
@@ -79,10 +79,10 @@ public final class AuditSarif {
                 "telltale-audit/" + corpus + "/");
     }
 
-    /** The document ids whose places {@link #of} wants: the first examples of every finding. */
+    /** The document ids whose places {@link #of} wants: the first examples of every artefact. */
     public static Set<String> exampleIds(AuditResult audit) {
         Set<String> ids = new java.util.LinkedHashSet<>();
-        for (Finding f : audit.findings()) {
+        for (Artefact f : audit.artefacts()) {
             f.examples().stream().limit(EXAMPLES).forEach(x -> ids.add(x.id()));
         }
         return ids;
@@ -97,7 +97,7 @@ public final class AuditSarif {
         };
     }
 
-    private static Result result(Finding f, String corpusUri, Map<String, Location> places, Baseline.Comparison since) {
+    private static Result result(Artefact f, String corpusUri, Map<String, Location> places, Baseline.Comparison since) {
         ArtefactIdentity identity = ArtefactIdentity.of(f);
         List<Location> locations = new ArrayList<>();
         f.examples().stream().limit(EXAMPLES).forEach(x ->
@@ -107,17 +107,19 @@ public final class AuditSarif {
         }
         Map<String, Object> props = new LinkedHashMap<>();
         props.put("identity", identity.fingerprint());
+        props.put("id", f.id());
         props.put("kind", f.kind().key());
         props.put("label", f.label());
         props.put("pattern", identity.pattern());
+        props.put("terms", f.termNames());
         props.put("severity", f.severity().key());
         props.put("support", f.support());
         props.put("importance", f.importance());
-        props.put("z", f.z());
-        props.put("pmi", f.pmi());
+        props.put("association", f.association());
         props.put("confirmed", f.confirmed());
-        props.put("scrubFlips", f.scrubFlips());
-        props.put("scrubDrop", f.scrubDrop());
+        props.put("scrubDocuments", f.scrub().documents());
+        props.put("scrubFlips", f.scrub().flips());
+        props.put("scrubDrop", f.scrub().scoreDrop());
         if (f.policy() != null) {
             props.put("policy", f.policy());
         }
@@ -134,15 +136,15 @@ public final class AuditSarif {
         return since.stateOf(identity) == Baseline.State.NEW ? SarifLog.BaselineState.NEW : SarifLog.BaselineState.UNCHANGED;
     }
 
-    static String message(Finding f) {
+    static String message(Artefact f) {
         String scrub = f.confirmed()
-                ? String.format(Locale.ROOT, "the scrub test confirms it (%d explained documents flipped, score drop %.3f)",
-                        f.scrubFlips(), f.scrubDrop())
-                : String.format(Locale.ROOT, "the scrub test did not confirm it (%d flipped, score drop %.3f)",
-                        f.scrubFlips(), f.scrubDrop());
-        return String.format(Locale.ROOT, "%s %s artefact '%s' pushes the model towards '%s'; it occurs in %d corpus "
-                        + "documents; %s.", capital(f.severity().key()), f.kind().key(), oneLine(f.term()), f.label(),
-                f.support(), scrub);
+                ? String.format(Locale.ROOT, "removing it alone confirms it (%d of %d explained documents flipped, score "
+                        + "drop %.3f)", f.scrub().flips(), f.scrub().documents(), f.scrub().scoreDrop())
+                : String.format(Locale.ROOT, "removing it alone did not confirm it (%d of %d flipped, score drop %.3f)",
+                        f.scrub().flips(), f.scrub().documents(), f.scrub().scoreDrop());
+        return String.format(Locale.ROOT, "%s %s artefact '%s' (terms: %s) pushes the model towards '%s'; its terms occur "
+                        + "in up to %d corpus documents; %s.", capital(f.severity().key()), f.kind().key(),
+                oneLine(f.pattern()), oneLine(String.join(", ", f.termNames())), f.label(), f.support(), scrub);
     }
 
     private static Map<String, Object> settings(AuditResult.Summary s) {

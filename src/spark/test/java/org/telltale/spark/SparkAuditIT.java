@@ -40,7 +40,8 @@ class SparkAuditIT {
         Path sarif = dir.resolve("spark.sarif");
         JsonNode single = compare(corpus, model, "-Dspark.sql.files.maxPartitionBytes=262144", "local[2]",
                 "--sample", "40", "--probes", "300");
-        assertTrue(single.path("findings").size() > 0, "the leaky demo corpus has findings: " + single);
+        assertEquals(2, single.path("version").asInt(), "the artefact contract");
+        assertTrue(single.path("artefacts").size() > 0, "the leaky demo corpus has artefacts: " + single);
         Run withSarif = SparkRun.front(dir, "", "SparkAudit", "--master", "local[1]", "--corpus", corpus.toString(),
                 "--model", model.toString(), "--out", dir.resolve("spark-sarif").toString(), "--quiet", "--sample", "20",
                 "--probes", "200", "--fail-on", "never", "--sarif", sarif.toString());
@@ -64,7 +65,7 @@ class SparkAuditIT {
         try (Stream<Path> failed = Files.list(failures)) {
             assertTrue(failed.count() >= 3, "planned failures happened in several stages");
         }
-        String found = single.path("findings").toString();
+        String found = single.path("artefacts").toString();
         // The planted artefacts of UtilityQueues are found (the single-machine tests check their kinds).
         assertTrue(found.contains("ivr7") && found.contains("ledgerline.example"), found);
         assertEquals(360, single.path("summary").path("documents").asLong());

@@ -78,7 +78,7 @@ class AuditReportBrowserTest {
     }
 
     private static List<Double> sortedImportances(boolean descending) {
-        List<Double> values = new ArrayList<>(audit.result().findings().stream().map(AuditResult.Finding::importance).toList());
+        List<Double> values = new ArrayList<>(audit.result().artefacts().stream().map(AuditResult.Artefact::importance).toList());
         values.sort(descending ? java.util.Comparator.reverseOrder() : java.util.Comparator.naturalOrder());
         return values;
     }
@@ -86,18 +86,18 @@ class AuditReportBrowserTest {
     @Test
     void filtersNarrowTheFindings() throws Exception {
         chromium.open(file);
-        int all = audit.result().findings().size();
+        int all = audit.result().artefacts().size();
         assertEquals(all, visibleFindingRows().size());
         new Select(chromium.driver.findElement(By.id("tt-f-kind"))).selectByValue("header");
-        assertEquals(List.of("bil"), visibleFindingRows().stream().map(r -> r.findElement(By.tagName("a")).getText()).toList());
+        assertEquals(List.of("Queue: bil"), visibleFindingRows().stream().map(r -> r.findElement(By.tagName("a")).getText()).toList());
         assertEquals("1 of " + all + " findings shown", chromium.driver.findElement(By.id("tt-f-count")).getText());
         new Select(chromium.driver.findElement(By.id("tt-f-kind"))).selectByValue("");
         chromium.driver.findElement(By.id("tt-f-conf")).click();
-        long confirmed = audit.result().findings().stream().filter(AuditResult.Finding::confirmed).count();
+        long confirmed = audit.result().artefacts().stream().filter(AuditResult.Artefact::confirmed).count();
         assertEquals(confirmed, visibleFindingRows().size());
         chromium.driver.findElement(By.id("tt-f-conf")).click();
         chromium.driver.findElement(By.id("tt-f-supp")).click();
-        long open = audit.result().findings().stream().filter(f -> !f.suppressed()).count();
+        long open = audit.result().artefacts().stream().filter(f -> !f.suppressed()).count();
         assertEquals(open, visibleFindingRows().size());
         chromium.driver.findElement(By.id("tt-f-text")).sendKeys("portal");
         assertEquals(1, visibleFindingRows().size());
@@ -149,7 +149,8 @@ class AuditReportBrowserTest {
         List<Explanation> explanations = new ArrayList<>(audit.explanations());
         explanations.add(hostile);
         AuditResult base = audit.result();
-        AuditResult withHostile = new AuditResult(base.summary(), base.findings(), base.scrub(), List.of(hostile.id()));
+        AuditResult withHostile = new AuditResult(base.summary(), base.artefacts(), base.scrub(), List.of(hostile.id()),
+                base.terms());
         Path hostileFile = dir.resolve("audit-hostile.html");
         HtmlReports.write(HtmlReports.audit(withHostile, explanations), hostileFile, true);
         chromium.open(hostileFile);

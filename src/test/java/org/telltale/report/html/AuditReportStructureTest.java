@@ -72,13 +72,13 @@ class AuditReportStructureTest {
     void findingsTableHasTheContractColumnsAndLinksToEvidence() {
         List<String> heads = PAGE.select("#tt-findings thead th").eachText().stream()
                 .map(h -> h.toLowerCase(Locale.ROOT)).toList();
-        assertEquals(List.of("term", "kind", "severity", "label", "support", "importance", "association", "confirmed"), heads);
+        assertEquals(List.of("artefact", "kind", "severity", "label", "support", "importance", "association", "confirmed"), heads);
         List<Element> rows = PAGE.select("#tt-findings tbody tr");
-        assertEquals(AUDIT.result().findings().size(), rows.size());
+        assertEquals(AUDIT.result().artefacts().size(), rows.size());
         for (int i = 0; i < rows.size(); i++) {
-            AuditResult.Finding f = AUDIT.result().findings().get(i);
+            AuditResult.Artefact f = AUDIT.result().artefacts().get(i);
             Element row = rows.get(i);
-            assertEquals(f.term(), row.child(0).attr("data-v"));
+            assertEquals(f.pattern() + " " + String.join(", ", f.termNames()), row.child(0).attr("data-v"));
             assertEquals(f.kind().key(), row.attr("data-kind"));
             assertEquals(f.severity().key(), row.attr("data-sev"));
             assertEquals(Long.toString(f.support()), row.child(4).text());
@@ -86,28 +86,29 @@ class AuditReportStructureTest {
             String target = row.selectFirst("a").attr("href").substring(1);
             Element evidence = PAGE.getElementById(target);
             assertNotNull(evidence, target);
-            assertTrue(evidence.selectFirst("h3").text().startsWith(f.term()));
+            assertTrue(evidence.selectFirst("h3").text().startsWith(f.pattern()));
         }
     }
 
     @Test
     void contextsQuoteTheTermAndLinkToItsDocument() {
-        for (int i = 0; i < AUDIT.result().findings().size(); i++) {
-            AuditResult.Finding f = AUDIT.result().findings().get(i);
+        for (int i = 0; i < AUDIT.result().artefacts().size(); i++) {
+            AuditResult.Artefact f = AUDIT.result().artefacts().get(i);
             Element evidence = PAGE.getElementById("finding-" + i);
             List<Element> contexts = evidence.select("p.tt-ctx");
-            assertFalse(contexts.isEmpty(), f.term());
+            assertFalse(contexts.isEmpty(), f.pattern());
             for (Element c : contexts) {
                 String href = c.selectFirst("a.tt-ctx-doc").attr("href");
                 assertNotNull(PAGE.getElementById("tpl-" + href.substring(1)), href);
                 List<Element> marks = c.select("mark.tt-cx");
                 assertFalse(marks.isEmpty(), "term marked in " + c.text());
                 for (Element m : marks) {
-                    assertTrue(m.text().toLowerCase(Locale.ROOT).startsWith(f.term()), m.text() + " for " + f.term());
+                    assertTrue(f.termNames().stream().anyMatch(t -> m.text().toLowerCase(Locale.ROOT).startsWith(t)),
+                            m.text() + " for " + f.termNames());
                 }
             }
             int shownDocs = (int) contexts.stream().map(c -> c.selectFirst("a").text()).distinct().count();
-            assertEquals(Math.min(f.examples().size(), AuditViews.CONTEXTS_PER_FINDING), shownDocs, f.term());
+            assertEquals(Math.min(f.examples().size(), AuditViews.CONTEXTS_PER_FINDING), shownDocs, f.pattern());
         }
     }
 
@@ -125,11 +126,14 @@ class AuditReportStructureTest {
     }
 
     @Test
-    void scatterMarksEveryFindingByKindShapeAndLinksIt() {
+    void scatterMarksEveryArtefactTermByKindShapeAndLinksItAndDrawsTheRestAsACloud() {
         List<Element> points = PAGE.select("svg a.tt-pt");
-        assertEquals(AUDIT.result().findings().size(), points.size());
+        assertEquals(AUDIT.result().artefacts().size(), points.size(), "one term per sample artefact");
+        long unflagged = AUDIT.result().terms().stream().filter(t -> t.artefact() == null).count();
+        assertEquals(unflagged, PAGE.select("svg circle.tt-cloud").size());
+        assertTrue(unflagged > 0);
         for (int i = 0; i < points.size(); i++) {
-            AuditResult.Finding f = AUDIT.result().findings().get(i);
+            AuditResult.Artefact f = AUDIT.result().artefacts().get(i);
             Element p = points.get(i);
             assertEquals("#finding-" + i, p.attr("href"));
             assertTrue(p.hasClass("tt-sev-" + f.severity().key()));
@@ -149,19 +153,22 @@ class AuditReportStructureTest {
     @Test
     void hostileTermsIdsAndLabelsStayText() throws Exception {
         Explanation hostile = HostileTexts.explanation();
-        AuditResult.Finding f = new AuditResult.Finding("<script>window.telltalePwned=9</script>", ArtefactKind.HEADER,
-                Severity.HIGH, HostileTexts.HOSTILE_LABEL, 1, 0.5, 9.0, true, 9.0, 1.0, 0.9, Map.of("x", 1L), 0.3, 1.0,
-                1, false, null, null, Map.of("header", 1.0), 1, 0.2,
+        String hostileText = "<script>window.telltalePwned=9</script>";
+        AuditResult.Artefact f = new AuditResult.Artefact("header-000000000000", ArtefactKind.HEADER, Severity.HIGH,
+                HostileTexts.HOSTILE_LABEL, hostileText, 1, 0.5, 9.0, 0.9, true, false, null, null,
+                List.of(new AuditResult.ArtefactTerm(hostileText, 0.5, 9.0, 0.3)), AuditResult.Effect.NONE,
                 List.of(new AuditResult.Example(hostile.id(), hostile.terms().get(1).spans())));
         AuditResult base = AUDIT.result();
-        AuditResult audit = new AuditResult(base.summary(), List.of(f), base.scrub(), List.of(hostile.id()));
+        AuditResult audit = new AuditResult(base.summary(), List.of(f), base.scrub(), List.of(hostile.id()),
+                List.of(new AuditResult.TermStat(hostileText, HostileTexts.HOSTILE_LABEL, ArtefactKind.HEADER, 1, 0.5,
+                        9.0, 1.0, 0.3, 1, f.id())));
         List<Explanation> explanations = new ArrayList<>(AUDIT.explanations());
         explanations.add(hostile);
         Document page = Jsoup.parse(HtmlReports.audit(audit, explanations));
         ReportChecks.strictPolicy(page);
         ReportChecks.selfContained(page);
         ReportChecks.noEventHandlers(page);
-        assertEquals(f.term(), page.selectFirst("#tt-findings td.tt-term a").text());
+        assertEquals(f.pattern(), page.selectFirst("#tt-findings td.tt-term a").text());
         assertEquals(HostileTexts.HOSTILE_ID, page.selectFirst("#picks .tt-docid").text());
         assertTrue(page.select("svg onload, textarea").isEmpty());
     }
@@ -169,9 +176,9 @@ class AuditReportStructureTest {
     @Test
     void anAuditWithoutFindingsOrExplanationsStillRenders() {
         AuditResult base = AUDIT.result();
-        AuditResult clean = new AuditResult(base.summary(), List.of(), List.of(), List.of("HL-missing"));
+        AuditResult clean = new AuditResult(base.summary(), List.of(), List.of(), List.of("HL-missing"), List.of());
         Document page = Jsoup.parse(HtmlReports.audit(clean, List.of()));
-        assertTrue(page.selectFirst("#findings").text().contains("No finding"));
+        assertTrue(page.selectFirst("#findings").text().contains("No artefact"));
         assertTrue(page.selectFirst("#summary").text().contains("That is not a certificate"));
         assertTrue(page.selectFirst("#picks").text().contains("HL-missing"), "a pick without its explanation is named");
         assertTrue(page.select("template").isEmpty());

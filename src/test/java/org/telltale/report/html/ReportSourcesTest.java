@@ -43,7 +43,7 @@ class ReportSourcesTest {
         assertEquals(expected, r.html());
         var page = Jsoup.parse(r.html());
         assertEquals(30, page.select("#documents template").size());
-        assertEquals(audit.result().findings().size(), page.select("#tt-findings tbody tr").size());
+        assertEquals(audit.result().artefacts().size(), page.select("#tt-findings tbody tr").size());
     }
 
     @Test

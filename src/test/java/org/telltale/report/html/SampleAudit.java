@@ -87,21 +87,35 @@ final class SampleAudit {
             explanations.add(SampleExplanations.explanation(id, body, LABELS[predicted], LABELS[predicted], scores,
                     1000, 0.6 + random.nextDouble() * 0.35, terms, LABELS[gold]));
         }
-        List<AuditResult.Finding> findings = List.of(
-                finding("bil", ArtefactKind.HEADER, Severity.HIGH, "billing", 0.25, 21.4, true, false, examples.get("bil")),
-                finding("portal", ArtefactKind.BOILERPLATE, Severity.MEDIUM, "account", 0.18, 17.9, true, false,
-                        examples.get("portal")),
-                finding("noreply", ArtefactKind.ADDRESS, Severity.LOW, "outage", 0.07, 5.2, false, false,
-                        examples.get("noreply")),
-                finding("refund", ArtefactKind.CONTENT, Severity.LOW, "billing", 0.12, 9.6, false, true,
-                        examples.get("refund")));
+        List<AuditResult.Artefact> artefacts = List.of(
+                artefact("Queue: bil", List.of("bil"), ArtefactKind.HEADER, Severity.HIGH, "billing", 0.25, 21.4, true,
+                        false, examples.get("bil")),
+                artefact("Sent from the Harbourline customer portal", List.of("portal"), ArtefactKind.BOILERPLATE,
+                        Severity.MEDIUM, "account", 0.18, 17.9, true, false, examples.get("portal")),
+                artefact("harbourline.example", List.of("noreply"), ArtefactKind.ADDRESS, Severity.LOW, "outage", 0.07,
+                        5.2, false, false, examples.get("noreply")),
+                artefact("refund", List.of("refund"), ArtefactKind.CONTENT, Severity.LOW, "billing", 0.12, 9.6, false,
+                        true, examples.get("refund")));
         List<AuditResult.Scrub> scrub = List.of(
-                new AuditResult.Scrub(ArtefactKind.HEADER, "lines", List.of("bil"), "explained", documents / 3,
+                new AuditResult.Scrub("header", "lines", List.of(artefacts.get(0).id()), "explained", documents / 3,
                         documents / 8, 0.375, 0.212, 0.93, 0.71),
-                new AuditResult.Scrub(ArtefactKind.BOILERPLATE, "lines", List.of("portal"), "explained", documents / 3,
+                new AuditResult.Scrub("boilerplate", "lines", List.of(artefacts.get(1).id()), "explained", documents / 3,
                         documents / 20, 0.15, 0.094, 0.91, 0.84),
-                new AuditResult.Scrub(ArtefactKind.ADDRESS, "terms", List.of("noreply"), "explained", documents / 4,
-                        0, 0.0, 0.004, 0.9, 0.9));
+                new AuditResult.Scrub("address", "matches", List.of(artefacts.get(2).id()), "explained", documents / 4,
+                        0, 0.0, 0.004, 0.9, 0.9),
+                new AuditResult.Scrub(AuditResult.ALL, "mixed", artefacts.subList(0, 3).stream()
+                        .map(AuditResult.Artefact::id).toList(), "explained", documents / 2, documents / 6, 0.33, 0.18,
+                        0.92, 0.66));
+        List<AuditResult.TermStat> terms = new ArrayList<>();
+        for (AuditResult.Artefact a : artefacts) {
+            AuditResult.ArtefactTerm t = a.terms().get(0);
+            terms.add(new AuditResult.TermStat(t.term(), a.label(), a.kind(), a.support(), t.importance(),
+                    t.association(), 1.4, t.weight(), a.examples().size(), a.id()));
+        }
+        for (String word : List.of("invoice", "charged", "payment", "power", "water", "storm", "account", "password")) {
+            terms.add(new AuditResult.TermStat(word, "billing", ArtefactKind.CONTENT, 40, 0.2 + random.nextDouble(),
+                    random.nextDouble() * 6, 0.3, 0.05, 10, null));
+        }
         List<String> picks = new ArrayList<>();
         for (int i = 0; i < Math.min(3, documents); i++) {
             picks.add(explanations.get(i).id());
@@ -117,7 +131,7 @@ final class SampleAudit {
                 "harbourline-tickets.jsonl", seed, new AuditSettings(documents, 1000, 8, 3, false, "high",
                         AuditSettings.DEFAULT_ALPHA, 64, "standard", null),
                 "gold", prior, counts, 4.42, 3120, 0.81, 91_000);
-        return new Audit(new AuditResult(summary, findings, scrub, picks), explanations);
+        return new Audit(new AuditResult(summary, artefacts, scrub, picks, terms), explanations);
     }
 
     private static List<String> candidates(int label) {
@@ -128,18 +142,19 @@ final class SampleAudit {
         };
     }
 
-    private static AuditResult.Finding finding(String term, ArtefactKind kind, Severity severity, String label,
-            double weight, double z, boolean confirmed, boolean suppressed, List<AuditResult.Example> examples) {
-        Map<String, Long> df = new LinkedHashMap<>();
-        for (String l : LABELS) {
-            df.put(l, l.equals(label) ? (long) examples.size() : examples.size() / 20L);
-        }
+    private static AuditResult.Artefact artefact(String pattern, List<String> termNames, ArtefactKind kind,
+            Severity severity, String label, double weight, double z, boolean confirmed, boolean suppressed,
+            List<AuditResult.Example> examples) {
         double importance = Math.sqrt(examples.size() * weight);
-        return new AuditResult.Finding(term, kind, severity, label, examples.size(), importance, z, confirmed, z,
-                1.4, 0.96, df, weight, 0.97, examples.size(), suppressed, suppressed ? "accepted" : null,
-                suppressed ? "refund requests are the task's own evidence" : null,
-                kind == ArtefactKind.CONTENT ? Map.of("content", 1.0) : Map.of(kind.key(), 0.98, "content", 0.02), confirmed ? examples.size() / 3 : 0,
-                confirmed ? 0.2 : 0.01, examples);
+        List<AuditResult.ArtefactTerm> terms = termNames.stream()
+                .map(t -> new AuditResult.ArtefactTerm(t, importance, z, weight)).toList();
+        AuditResult.Effect scrub = new AuditResult.Effect(examples.size(), confirmed ? examples.size() / 3 : 0,
+                confirmed ? 1.0 / 3 : 0, confirmed ? 0.2 : 0.01, 0.95, confirmed ? 0.6 : 0.95);
+        String id = kind.key() + "-" + org.telltale.audit.ArtefactIdentity.of(kind, label, pattern).fingerprint()
+                .substring(0, 12);
+        return new AuditResult.Artefact(id, kind, severity, label, pattern, examples.size(), importance, z, 0.96,
+                confirmed, suppressed, suppressed ? "accepted" : null,
+                suppressed ? "refund requests are the task's own evidence" : null, terms, scrub, examples);
     }
 
 }
