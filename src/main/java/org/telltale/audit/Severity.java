@@ -21,6 +21,22 @@ public enum Severity {
         return ordinal() <= other.ordinal();
     }
 
+    /**
+     * The gate of {@code failOn}: the least severity that fails an audit, or {@code null} for
+     * {@code never}. Every front that runs an audit reads its gate here.
+     */
+    public static Severity gate(String failOn) {
+        if ("never".equals(failOn)) {
+            return null;
+        }
+        for (Severity s : values()) {
+            if (s.key().equals(failOn)) {
+                return s;
+            }
+        }
+        throw new IllegalArgumentException("failOn must be high, medium, low or never: " + failOn);
+    }
+
     public static Severity fromKey(String key) {
         for (Severity s : values()) {
             if (s.key().equals(key)) {

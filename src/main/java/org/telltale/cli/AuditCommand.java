@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 import org.telltale.ExitCodes;
+import org.telltale.OptionWords;
 import org.telltale.UsageException;
 import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditSettings;
@@ -78,7 +79,12 @@ final class AuditCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        Severity gate = failOn.equals("never") ? null : severity(failOn);
+        Severity gate;
+        try {
+            gate = Severity.gate(failOn);
+        } catch (IllegalArgumentException e) {
+            throw OptionWords.usage(e);
+        }
         if (resume && force) {
             throw new UsageException("--resume and --force exclude each other");
         }
@@ -90,7 +96,7 @@ final class AuditCommand implements Callable<Integer> {
             settings = new AuditSettings(sample, probes, words, picks, scrubAll, failOn, AuditSettings.DEFAULT_ALPHA,
                     model.settings().batch(), analyzer.spec(), policy == null ? null : policy.getFileName().toString());
         } catch (IllegalArgumentException e) {
-            throw new UsageException(e.getMessage());
+            throw OptionWords.usage(e);
         }
         if (failOnAll && baseline == null) {
             throw new UsageException("--fail-on-all is read only with --baseline");
@@ -138,14 +144,6 @@ final class AuditCommand implements Callable<Integer> {
         }
         boolean failing = since == null || failOnAll ? !result.open(gate).isEmpty() : !since.gate(gate).isEmpty();
         return failing ? ExitCodes.GATE : ExitCodes.OK;
-    }
-
-    private static Severity severity(String level) {
-        try {
-            return Severity.fromKey(level);
-        } catch (IllegalArgumentException e) {
-            throw new UsageException("--fail-on must be high, medium, low or never: " + level);
-        }
     }
 
     /** The explanation line form of the telltale.explanations contract, for the journal. */

@@ -4,7 +4,7 @@ import java.time.Duration;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.telltale.UsageException;
+import org.telltale.OptionWords;
 import org.telltale.connect.ConnectorSettings;
 import org.telltale.connect.Connectors;
 import org.telltale.connect.Durations;
@@ -68,55 +68,16 @@ public final class ModelOptions {
                     + "without label metadata).")
     List<String> labels = List.of();
 
-    /** The settings these options describe; a bad combination is a usage error. */
+    /** The settings these options describe; a bad value is a usage error, checked once by {@link ConnectorSettings}. */
     public ConnectorSettings settings() {
-        if (batch < 1) {
-            throw new UsageException("--batch must be at least 1: " + batch);
-        }
-        int inFlight = parallelValue();
-        if (retries < 0) {
-            throw new UsageException("--retries must be 0 or more: " + retries);
-        }
-        if (timeout.isZero() || timeout.isNegative()) {
-            throw new UsageException("--timeout must be positive: " + Durations.format(timeout));
-        }
         try {
-            return ConnectorSettings.of(spec).withProtocol(protocol).withBatch(batch).withParallel(inFlight)
+            return ConnectorSettings.of(spec).withProtocol(protocol).withBatch(batch)
+                    .withParallel(ConnectorSettings.parallelOf(parallel == null ? "auto" : parallel))
                     .withParallelMax(parallelMax).withTimeout(timeout).withRetries(retries).withHeaders(headers)
                     .withScores(scores).withLabels(labels == null ? List.of() : labels);
         } catch (IllegalArgumentException e) {
-            throw new UsageException(optionWords(e.getMessage()));
+            throw OptionWords.usage(e);
         }
-    }
-
-    /** {@code --parallel}: a count of at least 1, or {@code auto}. */
-    private int parallelValue() {
-        String v = parallel == null ? "auto" : parallel.strip();
-        if (v.equalsIgnoreCase("auto")) {
-            return ConnectorSettings.AUTO;
-        }
-        int n;
-        try {
-            n = Integer.parseInt(v);
-        } catch (NumberFormatException e) {
-            throw new UsageException("--parallel must be a number or auto: " + parallel);
-        }
-        if (n < 1) {
-            throw new UsageException(optionWords("parallel must be at least 1: " + n));
-        }
-        return n;
-    }
-
-    /** A setting's message in the core's words ("parallelMax must be …") with the option's name instead. */
-    static String optionWords(String message) {
-        String[][] names = {{"parallelMax", "--parallel-max"}, {"parallel", "--parallel"}, {"batch", "--batch"},
-            {"retries", "--retries"}, {"timeout", "--timeout"}};
-        for (String[] n : names) {
-            if (message.startsWith(n[0] + " ")) {
-                return n[1] + message.substring(n[0].length());
-            }
-        }
-        return message;
     }
 
     /** Opens the connector; the caller closes it. */

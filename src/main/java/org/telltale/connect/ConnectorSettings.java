@@ -78,10 +78,31 @@ public record ConnectorSettings(
             throw new IllegalArgumentException("maxRestarts must be 0 or more: " + maxRestarts);
         }
         if (timeout.isNegative() || timeout.isZero()) {
-            throw new IllegalArgumentException("timeout must be positive: " + timeout);
+            throw new IllegalArgumentException("timeout must be positive: " + Durations.format(timeout));
         }
         headers = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(headers));
         labels = List.copyOf(labels);
+    }
+
+    /**
+     * {@link #parallel} from its written form, as every front takes it: a count of at least 1, or
+     * {@code auto} (any case) for {@link #AUTO}. The one parser of that form.
+     */
+    public static int parallelOf(String value) {
+        String v = value.strip();
+        if (v.equalsIgnoreCase("auto")) {
+            return AUTO;
+        }
+        int n;
+        try {
+            n = Integer.parseInt(v);
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("parallel must be a number or auto: " + value);
+        }
+        if (n < 1) {
+            throw new IllegalArgumentException("parallel must be at least 1: " + n);
+        }
+        return n;
     }
 
     /** Defaults for everything but the spec: native protocol, batch 64, 30 s timeout, 3 retries. */

@@ -6,6 +6,7 @@ import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.telltale.OptionWords;
 import org.telltale.UsageException;
 import org.telltale.connect.ConnectorSettings;
 import org.telltale.connect.Connectors;
@@ -39,19 +40,15 @@ record ModelParams(String spec, String protocol, int batch, String parallel, int
         return p;
     }
 
-    /** The connector settings, for {@code where} the model is (the spec, or the shipped copy of a model file). */
+    /**
+     * The connector settings, for {@code where} the model is (the spec, or the shipped copy of a
+     * model file): each value read by the core's own parser and checked once by
+     * {@link ConnectorSettings}, as {@code telltale}'s model options are, with the same messages.
+     */
     ConnectorSettings settings(String where) {
-        if (batch < 1) {
-            throw new UsageException("--batch must be at least 1: " + batch);
-        }
-        int inFlight = parallelValue();
-        if (retries < 0) {
-            throw new UsageException("--retries must be 0 or more: " + retries);
-        }
-        Duration wait = Durations.parse(timeout);
-        if (wait.isZero() || wait.isNegative()) {
-            throw new UsageException("--timeout must be positive: " + Durations.format(wait));
-        }
+        Protocol readProtocol = read("--protocol", () -> Protocol.byName(protocol));
+        Duration wait = read("--timeout", () -> Durations.parse(timeout));
+        ScoreKind readScores = read("--scores", () -> ScoreKind.byName(scores));
         Map<String, String> named = new LinkedHashMap<>();
         for (String header : headers) {
             int eq = header.indexOf('=');
@@ -62,30 +59,21 @@ record ModelParams(String spec, String protocol, int batch, String parallel, int
         }
         List<String> labelList = labels == null ? List.of() : Arrays.asList(labels.split(","));
         try {
-            return ConnectorSettings.of(where).withProtocol(Protocol.byName(protocol)).withBatch(batch)
-                    .withParallel(inFlight).withParallelMax(parallelMax).withTimeout(wait).withRetries(retries)
-                    .withHeaders(named).withScores(ScoreKind.byName(scores)).withLabels(labelList);
+            return ConnectorSettings.of(where).withProtocol(readProtocol).withBatch(batch)
+                    .withParallel(ConnectorSettings.parallelOf(parallel)).withParallelMax(parallelMax).withTimeout(wait)
+                    .withRetries(retries).withHeaders(named).withScores(readScores).withLabels(labelList);
         } catch (IllegalArgumentException e) {
-            throw new UsageException("--" + e.getMessage());
+            throw OptionWords.usage(e);
         }
     }
 
-    /** {@code --parallel}: a count of at least 1, or {@code auto} (the default), as {@code telltale audit} takes it. */
-    private int parallelValue() {
-        String v = parallel.strip();
-        if (v.equalsIgnoreCase("auto")) {
-            return ConnectorSettings.AUTO;
-        }
-        int n;
+    /** A value of {@code option} read by the core's parser; what it refuses is a usage error naming the option. */
+    private static <T> T read(String option, java.util.function.Supplier<T> parse) {
         try {
-            n = Integer.parseInt(v);
-        } catch (NumberFormatException e) {
-            throw new UsageException("--parallel must be a number or auto: " + parallel);
+            return parse.get();
+        } catch (IllegalArgumentException e) {
+            throw OptionWords.value(option, e);
         }
-        if (n < 1) {
-            throw new UsageException("--parallel must be at least 1: " + n);
-        }
-        return n;
     }
 
     boolean isFile() {

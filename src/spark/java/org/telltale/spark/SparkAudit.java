@@ -12,6 +12,7 @@ import org.apache.spark.api.java.JavaRDD;
 import org.apache.spark.api.java.JavaSparkContext;
 import org.apache.spark.sql.SparkSession;
 import org.telltale.ExitCodes;
+import org.telltale.OptionWords;
 import org.telltale.UsageException;
 import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditSettings;
@@ -49,6 +50,14 @@ public final class SparkAudit {
         VALUES = List.copyOf(values);
     }
 
+    /**
+     * Why {@code --resume} is refused, by design: on one machine the journal lets a failed run
+     * continue; on Spark, recomputing failed tasks does that job, and there is no journal to resume.
+     */
+    static final String RESUME_REFUSED = "--resume is refused by SparkAudit: it keeps no journal, because Spark "
+            + "recomputes a failed task from its partition with the same result; a run whose driver died starts over. "
+            + "Run it again without --resume (with --force to replace --out)";
+
     private SparkAudit() {
     }
 
@@ -58,17 +67,18 @@ public final class SparkAudit {
 
     private static int run(String[] args, PrintStream out, PrintStream err) throws Exception {
         SparkOptions o = SparkOptions.parse(args, VALUES, List.of(ModelParams.HEADER), FLAGS);
-        String failOn = o.get("--fail-on", "high");
-        Severity gate = failOn.equals("never") ? null : severity(failOn);
-        if (o.has("--resume") && o.has("--force")) {
-            throw new UsageException("--resume and --force exclude each other");
-        }
         if (o.has("--resume")) {
-            throw new UsageException("--resume: SparkAudit keeps no journal (Spark reruns failed tasks); run it again "
-                    + "without --resume");
+            throw new UsageException(RESUME_REFUSED);
         }
         if (o.has("--scrub-all")) {
             throw new UsageException("--scrub-all is not available in SparkAudit yet; run telltale audit --scrub-all");
+        }
+        String failOn = o.get("--fail-on", "high");
+        Severity gate;
+        try {
+            gate = Severity.gate(failOn);
+        } catch (IllegalArgumentException e) {
+            throw OptionWords.usage(e);
         }
         String corpusPath = o.required("--corpus");
         ModelParams model = ModelParams.of(o);
@@ -81,7 +91,7 @@ public final class SparkAudit {
                     o.integer("--picks", 5), false, failOn, AuditSettings.DEFAULT_ALPHA, model.batch(), analyzerSpec,
                     policyFile == null ? null : policyFile.getFileName().toString());
         } catch (IllegalArgumentException e) {
-            throw new UsageException(e.getMessage());
+            throw OptionWords.usage(e);
         }
         long seed = o.longValue("--seed", 1L);
         SparkCorpus.Fields fields = new SparkCorpus.Fields(o.get("--id-field", "id"), o.get("--text-field", "text"),
@@ -156,14 +166,6 @@ public final class SparkAudit {
             return p.getProperty("version", "unknown");
         } catch (java.io.IOException e) {
             return "unknown";
-        }
-    }
-
-    private static Severity severity(String level) {
-        try {
-            return Severity.fromKey(level);
-        } catch (IllegalArgumentException e) {
-            throw new UsageException("--fail-on must be high, medium, low or never: " + level);
         }
     }
 

@@ -71,6 +71,27 @@ class SparkAuditIT {
         assertEquals(360, single.path("summary").path("documents").asLong());
     }
 
+    @Test
+    void aBadModelOptionReadsAsInTelltaleAudit() throws Exception {
+        // The connector settings are checked in one place and mapped to option names at both fronts.
+        for (String[] bad : new String[][] {{"--parallel", "0"}, {"--parallel", "lots"}, {"--parallel-max", "0"},
+            {"--timeout", "0s"}, {"--fail-on", "sometimes"}}) {
+            String[] options = {"--corpus", "c.jsonl", "--model", "m.json", "--out", dir.resolve("bad").toString(), bad[0], bad[1]};
+            Run one = JarRun.telltale(dir, concat(new String[] {"audit"}, options));
+            Run distributed = SparkRun.front(dir, "", "SparkAudit", options);
+            assertEquals(2, one.code(), one.err());
+            assertEquals(2, distributed.code(), distributed.err());
+            assertEquals(errorLine(one.err()), errorLine(distributed.err()), String.join(" ", bad));
+        }
+    }
+
+    @Test
+    void resumeIsRefusedBecauseSparkRecomputesFailedTasks() throws Exception {
+        Run refused = SparkRun.front(dir, "", "SparkAudit", "--corpus", "c.jsonl", "--model", "m.json", "--resume");
+        assertEquals(2, refused.code(), refused.err());
+        assertEquals("telltale: " + SparkAudit.RESUME_REFUSED, errorLine(refused.err()));
+    }
+
     /** Runs both audits with the same options and checks they agree; returns the single-machine audit.json. */
     private JsonNode compare(Path corpus, Path model, String javaOpts, String master, String... options) throws Exception {
         Path oneOut = dir.resolve("single-" + corpus.getFileName());
@@ -107,6 +128,13 @@ class SparkAuditIT {
         }
         assertTrue(lines.size() > 0);
         return lines;
+    }
+
+    /** The one error line of a run's stderr (the JVM may warn before it, e.g. of incubator modules). */
+    private static String errorLine(String err) {
+        List<String> lines = err.lines().filter(l -> l.startsWith("telltale: ")).toList();
+        assertEquals(1, lines.size(), err);
+        return lines.get(0);
     }
 
     private static String[] concat(String[] a, String[] b) {

@@ -1,0 +1,47 @@
+package org.telltale;
+
+import java.util.Map;
+
+/**
+ * The edge between the core's words and the command line's: core classes name a setting by its
+ * own name ({@code "parallelMax must be at least 1: 0"}), and every front that takes options —
+ * the {@code telltale} commands and the Spark fronts, which share option names — turns such a
+ * message into one about the option ({@code "--parallel-max must be at least 1: 0"}) here, once.
+ */
+public final class OptionWords {
+    /** Setting name in the core → option name on the command line. */
+    private static final Map<String, String> OPTIONS = Map.of(
+            "parallelMax", "--parallel-max",
+            "parallel", "--parallel",
+            "batch", "--batch",
+            "retries", "--retries",
+            "timeout", "--timeout",
+            "sample", "--sample",
+            "probes", "--probes",
+            "words", "--words",
+            "picks", "--picks",
+            "failOn", "--fail-on");
+
+    private OptionWords() {
+    }
+
+    /** {@code message} with a leading setting name replaced by its option's name; other messages unchanged. */
+    public static String of(String message) {
+        int space = message.indexOf(' ');
+        String option = space < 0 ? null : OPTIONS.get(message.substring(0, space));
+        return option == null ? message : option + message.substring(space);
+    }
+
+    /** A setting the core refused, as a usage error (exit code 2) in the option's words. */
+    public static UsageException usage(IllegalArgumentException refused) {
+        return new UsageException(of(refused.getMessage()));
+    }
+
+    /**
+     * A value the core could not read for {@code option} ({@code "unknown protocol 'grpc' (expected …)"}),
+     * as a usage error that names the option first.
+     */
+    public static UsageException value(String option, IllegalArgumentException refused) {
+        return new UsageException(option + ": " + refused.getMessage());
+    }
+}
