@@ -90,7 +90,11 @@ public record AuditView(
     }
 
     public record Point(String anchor, String x, String y, String shape, String severity, boolean suppressed,
-            String term, String tooltip, boolean labelled) {
+            String term, String tooltip, PointLabel label) {
+    }
+
+    /** The text beside a point, drawn at (x + dx, y + dy) with the given SVG text-anchor. */
+    public record PointLabel(String text, String dx, String dy, String anchor) {
     }
 
     /** One line of the document index. */

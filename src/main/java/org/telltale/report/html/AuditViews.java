@@ -114,7 +114,8 @@ public final class AuditViews {
         }
         long confirmed = open.stream().filter(AuditResult.Artefact::confirmed).count();
         return open.size() + (open.size() == 1 ? " open artefact" : " open artefacts") + ", " + confirmed
-                + " confirmed by its own scrub: the model's predictions move when that artefact alone is removed.";
+                + (confirmed == 1 ? " confirmed by its own scrub" : " confirmed each by its own scrub")
+                + ": the model's predictions move when that artefact alone is removed.";
     }
 
     private static List<String> kinds(AuditResult audit) {

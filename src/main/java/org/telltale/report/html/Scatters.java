@@ -1,7 +1,6 @@
 package org.telltale.report.html;
 
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 import org.telltale.audit.AuditResult;
 
@@ -58,9 +57,28 @@ final class Scatters {
                         Numbers.coord(y.map(finite(t.importance()), BOTTOM, TOP))));
             }
         }
-        List<AuditResult.TermStat> byImportance = new ArrayList<>(flagged);
-        byImportance.sort(Comparator.comparingDouble((AuditResult.TermStat t) -> finite(t.importance())).reversed());
-        List<AuditResult.TermStat> labelled = byImportance.subList(0, Math.min(LABELLED_LIMIT, byImportance.size()));
+        // One label per artefact, on its strongest term, naming the artefact's pattern: the reviewer
+        // decides about artefacts, and one label per term crowds the corner where they cluster.
+        java.util.Map<String, AuditResult.TermStat> strongest = new java.util.LinkedHashMap<>();
+        for (AuditResult.Artefact a : audit.artefacts()) {
+            for (AuditResult.TermStat t : flagged) {
+                if (t.artefact().equals(a.id()) && (!strongest.containsKey(a.id())
+                        || finite(t.importance()) > finite(strongest.get(a.id()).importance()))) {
+                    strongest.put(a.id(), t);
+                }
+            }
+        }
+        List<ChartLabels.Request> requests = new ArrayList<>();
+        List<AuditResult.TermStat> labelledTerms = new ArrayList<>(strongest.values());
+        for (AuditResult.TermStat t : labelledTerms) {
+            requests.add(new ChartLabels.Request(x.map(finite(t.association()), LEFT, RIGHT),
+                    y.map(finite(t.importance()), BOTTOM, TOP), shortened(rowOf.get(t.artefact()).pattern())));
+        }
+        List<double[]> markers = new ArrayList<>();
+        for (AuditResult.TermStat t : flagged) {
+            markers.add(new double[] {x.map(finite(t.association()), LEFT, RIGHT), y.map(finite(t.importance()), BOTTOM, TOP)});
+        }
+        List<ChartLabels.Placement> placements = new ChartLabels(0, 0, WIDTH, HEIGHT).place(requests, markers);
         List<AuditView.Point> points = new ArrayList<>();
         for (AuditResult.TermStat t : flagged) {
             AuditView.FindingRow f = rowOf.get(t.artefact());
@@ -68,9 +86,15 @@ final class Scatters {
             String tip = term + " of " + f.pattern() + " (" + f.kind() + ", " + f.severity() + ", " + f.label()
                     + "): importance " + Numbers.plain(t.importance(), 3) + ", association "
                     + Numbers.plain(t.association(), 2);
+            int at = labelledTerms.indexOf(t);
+            ChartLabels.Placement place = at >= 0 ? placements.get(at) : ChartLabels.Placement.NONE;
+            AuditView.PointLabel label = place.placed()
+                    ? new AuditView.PointLabel(requests.get(at).text(), Numbers.coord(place.dx()),
+                            Numbers.coord(place.dy()), place.anchor())
+                    : null;
             points.add(new AuditView.Point(f.anchor(), Numbers.coord(x.map(finite(t.association()), LEFT, RIGHT)),
                     Numbers.coord(y.map(finite(t.importance()), BOTTOM, TOP)), AuditViews.shape(f.kind()), f.severity(),
-                    f.suppressed(), term, tip, labelled.contains(t)));
+                    f.suppressed(), term, tip, label));
         }
         String threshold = Double.isFinite(zThreshold) ? Numbers.coord(x.map(zThreshold, LEFT, RIGHT)) : null;
         return new AuditView.Scatter(WIDTH, HEIGHT, Numbers.coord(LEFT), Numbers.coord(RIGHT), Numbers.coord(TOP),
@@ -82,7 +106,13 @@ final class Scatters {
         return Double.isFinite(v) ? v : 0;
     }
 
-    private static final int LABELLED_LIMIT = 12;
+    /** Longest label drawn in the chart; longer patterns are cut with an ellipsis (the tooltip has them whole). */
+    static final int LABEL_LIMIT = 24;
+
+    static String shortened(String pattern) {
+        String visible = VisibleText.inline(pattern);
+        return visible.length() <= LABEL_LIMIT ? visible : visible.substring(0, LABEL_LIMIT - 1) + "…";
+    }
 
     private static String label(double value, double step) {
         int decimals = step >= 1 ? 0 : (int) Math.ceil(-Math.log10(step));

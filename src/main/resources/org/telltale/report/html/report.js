@@ -104,7 +104,7 @@
         r.hidden = !ok;
         if (ok) { shown++; }
       });
-      count.textContent = shown + ' of ' + body.rows.length + ' findings shown';
+      count.textContent = shown + ' of ' + body.rows.length + ' artefacts shown';
     };
     [text, kind, sev, conf, supp].forEach(function (el) {
       el.addEventListener('input', filter);

@@ -90,7 +90,7 @@ class AuditReportBrowserTest {
         assertEquals(all, visibleFindingRows().size());
         new Select(chromium.driver.findElement(By.id("tt-f-kind"))).selectByValue("header");
         assertEquals(List.of("Queue: bil"), visibleFindingRows().stream().map(r -> r.findElement(By.tagName("a")).getText()).toList());
-        assertEquals("1 of " + all + " findings shown", chromium.driver.findElement(By.id("tt-f-count")).getText());
+        assertEquals("1 of " + all + " artefacts shown", chromium.driver.findElement(By.id("tt-f-count")).getText());
         new Select(chromium.driver.findElement(By.id("tt-f-kind"))).selectByValue("");
         chromium.driver.findElement(By.id("tt-f-conf")).click();
         long confirmed = audit.result().artefacts().stream().filter(AuditResult.Artefact::confirmed).count();
