@@ -1,41 +1,41 @@
 package org.telltale.connect;
 
-import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.json.JsonReadFeature;
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
-import java.io.IOException;
-import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Supplier;
+import org.telltale.json.ContractException;
+import org.telltale.json.JsonValue;
 
 /**
- * The JSON plumbing shared by the codecs. NaN and Infinity literals (which Python's {@code json}
- * module writes by default) are read as numbers so that validation can name them, instead of a
- * vague parse error.
+ * The JSON plumbing shared by the codecs. Answers are read by {@link JsonValue}, the reader of
+ * every contract, so a missing or mistyped value names its path in the answer
+ * ({@code scores[1][0]}) and what was found; NaN and Infinity literals (which Python's
+ * {@code json} module writes by default) are read as numbers so that validation can name them,
+ * instead of a vague parse error. Every broken answer becomes a {@link MalformedResponse}
+ * carrying a snippet of the response.
  */
 final class Json {
-    static final ObjectMapper MAPPER = JsonMapper.builder(new JsonFactory())
-            .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
-            .build();
+    /** Writes requests; answers are never read with it. */
+    static final ObjectMapper MAPPER = new ObjectMapper();
+    /** How errors name an answer. */
+    static final String SOURCE = "the response";
 
     private Json() {
     }
 
-    static JsonNode parse(byte[] body) {
+    /** The answer, parsed strictly (no duplicate keys, no trailing content, nesting at most 1,000 deep). */
+    static JsonValue parse(byte[] body) {
+        return read(() -> JsonValue.parseAllowingNonFinite(body, SOURCE), Snippet.of(body));
+    }
+
+    /** Runs {@code reading}, turning a broken contract into a MalformedResponse that ends with {@code snippet}. */
+    static <T> T read(Supplier<T> reading, String snippet) {
         try {
-            JsonNode node = MAPPER.readTree(body);
-            if (node == null || node.isMissingNode()) {
-                throw new MalformedResponse("the response is empty");
-            }
-            return node;
-        } catch (JsonProcessingException e) {
-            throw new MalformedResponse("the response is not valid JSON (" + e.getOriginalMessage()
-                    + "); response: " + Snippet.of(body));
-        } catch (IOException e) {
-            throw new MalformedResponse("the response could not be read (" + e.getMessage() + ")");
+            return reading.get();
+        } catch (ContractException broken) {
+            throw new MalformedResponse(broken.getMessage() + (snippet.isEmpty() ? "" : "; response: " + snippet));
         }
     }
 
@@ -55,36 +55,18 @@ final class Json {
         return a;
     }
 
-    /** The strings of a JSON array, or a MalformedResponse naming {@code what}. */
-    static List<String> strings(JsonNode node, String what, String snippet) {
-        if (node == null || !node.isArray()) {
-            throw new MalformedResponse("'" + what + "' is missing or not an array; response: " + snippet);
-        }
-        List<String> out = new ArrayList<>(node.size());
-        for (JsonNode e : node) {
-            if (!e.isTextual()) {
-                throw new MalformedResponse("'" + what + "' holds a non-string " + e.getNodeType().toString().toLowerCase(java.util.Locale.ROOT)
-                        + "; response: " + snippet);
-            }
-            out.add(e.textValue());
+    /** A row of numbers: the elements of an array, each a number. */
+    static double[] numbers(JsonValue row) {
+        List<JsonValue> values = row.elements();
+        double[] out = new double[values.size()];
+        for (int j = 0; j < out.length; j++) {
+            out[j] = values.get(j).asNumber();
         }
         return out;
     }
 
-    /** A row of numbers, or a MalformedResponse naming row {@code index} of {@code what}. */
-    static double[] numbers(JsonNode node, String what, int index, String snippet) {
-        if (node == null || !node.isArray()) {
-            throw new MalformedResponse("row " + index + " of '" + what + "' is not an array of numbers; response: " + snippet);
-        }
-        double[] row = new double[node.size()];
-        for (int j = 0; j < row.length; j++) {
-            JsonNode v = node.get(j);
-            if (!v.isNumber()) {
-                throw new MalformedResponse("row " + index + " of '" + what + "' holds " + Snippet.of(v.toString())
-                        + ", not a number; response: " + snippet);
-            }
-            row[j] = v.doubleValue();
-        }
-        return row;
+    /** What the model said in its {@code error} field, shortened. */
+    static String error(JsonValue error) {
+        return Snippet.of(error.node().isTextual() ? error.node().textValue() : error.node().toString());
     }
 }

@@ -1,8 +1,9 @@
 package org.telltale.connect;
 
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
+import java.util.Optional;
+import org.telltale.json.JsonValue;
 
 /**
  * Telltale's scoring protocol, spoken over HTTP and by subprocesses: request
@@ -20,24 +21,21 @@ final class NativeCodec {
     }
 
     static RawScores parse(byte[] body) {
-        JsonNode root = Json.parse(body);
+        JsonValue root = Json.parse(body);
         String snippet = Snippet.of(body);
-        if (!root.isObject()) {
-            throw new MalformedResponse("the response is not a JSON object; response: " + snippet);
-        }
-        JsonNode error = root.get("error");
-        if (error != null && !root.has("scores")) {
-            throw new MalformedResponse("the model answered an error: " + Snippet.of(error.isTextual() ? error.textValue() : error.toString()));
-        }
-        List<String> labels = Json.strings(root.get("labels"), "labels", snippet);
-        JsonNode scores = root.get("scores");
-        if (scores == null || !scores.isArray()) {
-            throw new MalformedResponse("'scores' is missing or not an array; response: " + snippet);
-        }
-        double[][] rows = new double[scores.size()][];
-        for (int i = 0; i < rows.length; i++) {
-            rows[i] = Json.numbers(scores.get(i), "scores", i, snippet);
-        }
-        return new RawScores(labels, rows, snippet);
+        return Json.read(() -> {
+            root.requireObject();
+            Optional<JsonValue> error = root.find("error");
+            if (error.isPresent() && !root.has("scores")) {
+                throw new MalformedResponse("the model answered an error: " + Json.error(error.get()));
+            }
+            List<String> labels = root.strings("labels");
+            List<JsonValue> scores = root.array("scores");
+            double[][] rows = new double[scores.size()][];
+            for (int i = 0; i < rows.length; i++) {
+                rows[i] = Json.numbers(scores.get(i));
+            }
+            return new RawScores(labels, rows, snippet);
+        }, snippet);
     }
 }

@@ -5,6 +5,8 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.net.URI;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
+import org.telltale.json.JsonValue;
 
 /**
  * The Open Inference Protocol v2 (the KServe/Triton "predict protocol v2", REST binding) for text
@@ -42,26 +44,32 @@ final class OpenInferenceCodec implements HttpScorer.WireFormat {
     }
 
     static Metadata parseMetadata(byte[] body, List<String> fallbackLabels) {
-        JsonNode root = Json.parse(body);
+        JsonValue root = Json.parse(body);
         String snippet = Snippet.of(body);
-        if (!root.isObject()) {
-            throw new MalformedResponse("the model metadata is not a JSON object; response: " + snippet);
-        }
-        String input = "text";
-        JsonNode inputs = root.get("inputs");
-        if (inputs != null && inputs.isArray() && inputs.size() > 0 && inputs.get(0).path("name").isTextual()) {
-            input = inputs.get(0).get("name").textValue();
-        }
-        List<String> labels = labelsAt(root.path("parameters").get("labels"), snippet);
-        JsonNode outputs = root.get("outputs");
-        if (labels == null && outputs != null && outputs.isArray() && outputs.size() > 0) {
-            labels = labelsAt(outputs.get(0).path("parameters").get("labels"), snippet);
-        }
-        return new Metadata(input, labels != null ? labels : fallbackLabels);
+        return Json.read(() -> {
+            root.requireObject();
+            // The input's name and the labels are optional in the metadata: defaults stand in for them.
+            String input = "text";
+            JsonNode inputs = root.node().get("inputs");
+            if (inputs != null && inputs.isArray() && inputs.size() > 0 && inputs.get(0).path("name").isTextual()) {
+                input = inputs.get(0).get("name").textValue();
+            }
+            List<String> labels = labelsOf(root);
+            List<JsonValue> outputs = root.node().path("outputs").isArray() ? root.array("outputs") : List.of();
+            if (labels == null && !outputs.isEmpty() && outputs.get(0).node().isObject()) {
+                labels = labelsOf(outputs.get(0));
+            }
+            return new Metadata(input, labels != null ? labels : fallbackLabels);
+        }, snippet);
     }
 
-    private static List<String> labelsAt(JsonNode node, String snippet) {
-        return node == null || node.isNull() ? null : Json.strings(node, "parameters.labels", snippet);
+    /** {@code parameters.labels} of a metadata object, or null where it is absent. */
+    private static List<String> labelsOf(JsonValue owner) {
+        Optional<JsonValue> parameters = owner.find("parameters");
+        if (parameters.isEmpty() || !parameters.get().node().isObject()) {
+            return null;
+        }
+        return parameters.get().has("labels") ? parameters.get().strings("labels") : null;
     }
 
     @Override
@@ -86,21 +94,22 @@ final class OpenInferenceCodec implements HttpScorer.WireFormat {
     }
 
     static RawScores parseInfer(byte[] body, int texts, List<String> knownLabels) {
-        JsonNode root = Json.parse(body);
+        JsonValue root = Json.parse(body);
         String snippet = Snippet.of(body);
-        if (!root.isObject()) {
-            throw new MalformedResponse("the inference response is not a JSON object; response: " + snippet);
-        }
+        return Json.read(() -> infer(root, knownLabels, snippet), snippet);
+    }
+
+    private static RawScores infer(JsonValue root, List<String> knownLabels, String snippet) {
+        root.requireObject();
         if (root.has("error") && !root.has("outputs")) {
-            throw new MalformedResponse("the model answered an error: " + Snippet.of(root.get("error").toString()));
+            throw new MalformedResponse("the model answered an error: " + Json.error(root.get("error")));
         }
-        JsonNode outputs = root.get("outputs");
-        if (outputs == null || !outputs.isArray() || outputs.isEmpty()) {
+        if (!root.node().path("outputs").isArray() || root.node().path("outputs").isEmpty()) {
             throw new MalformedResponse("the inference response has no 'outputs'; response: " + snippet);
         }
-        JsonNode tensor = null;
-        for (JsonNode o : outputs) {
-            String type = o.path("datatype").asText("");
+        JsonValue tensor = null;
+        for (JsonValue o : root.array("outputs")) {
+            String type = o.node().path("datatype").asText("");
             if (type.equals("FP32") || type.equals("FP64") || type.equals("FP16")) {
                 tensor = o;
                 break;
@@ -109,7 +118,7 @@ final class OpenInferenceCodec implements HttpScorer.WireFormat {
         if (tensor == null) {
             throw new MalformedResponse("the inference response has no FP32 or FP64 output; response: " + snippet);
         }
-        JsonNode shape = tensor.get("shape");
+        JsonNode shape = tensor.node().get("shape");
         if (shape == null || !shape.isArray() || shape.size() != 2 || !shape.get(0).canConvertToInt() || !shape.get(1).canConvertToInt()) {
             throw new MalformedResponse("the output tensor's shape is not [n, labels]: " + Snippet.of(String.valueOf(shape))
                     + "; response: " + snippet);
@@ -120,7 +129,7 @@ final class OpenInferenceCodec implements HttpScorer.WireFormat {
             throw new MalformedResponse("the output tensor's shape " + shape + " is negative; response: " + snippet);
         }
         List<Double> flat = new ArrayList<>();
-        flatten(tensor.get("data"), flat, snippet, 0);
+        flatten(tensor.get("data"), flat, 0);
         if ((long) n * k != flat.size()) {
             throw new MalformedResponse("the output tensor has shape " + shape + " but " + flat.size() + " values; response: " + snippet);
         }
@@ -138,17 +147,13 @@ final class OpenInferenceCodec implements HttpScorer.WireFormat {
         return new RawScores(labels, rows, snippet);
     }
 
-    private static void flatten(JsonNode data, List<Double> out, String snippet, int depth) {
-        if (data == null || !data.isArray()) {
-            throw new MalformedResponse("the output tensor's 'data' is not an array; response: " + snippet);
-        }
-        for (JsonNode v : data) {
-            if (v.isArray() && depth < 1) {
-                flatten(v, out, snippet, depth + 1);
-            } else if (v.isNumber()) {
-                out.add(v.doubleValue());
+    /** The tensor's data, flat or nested one level ([n, k] row-major either way). */
+    private static void flatten(JsonValue data, List<Double> out, int depth) {
+        for (JsonValue v : data.elements()) {
+            if (v.node().isArray() && depth < 1) {
+                flatten(v, out, depth + 1);
             } else {
-                throw new MalformedResponse("the output tensor holds " + Snippet.of(v.toString()) + ", not a number; response: " + snippet);
+                out.add(v.asNumber());
             }
         }
     }

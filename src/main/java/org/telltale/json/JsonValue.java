@@ -3,6 +3,7 @@ package org.telltale.json;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.core.json.JsonReadFeature;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -38,10 +39,17 @@ import java.util.stream.Collectors;
  * Immutable; thread-safe.
  */
 public final class JsonValue {
-    private static final ObjectMapper MAPPER = JsonMapper.builder(new JsonFactory())
-            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
-            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+    private static final ObjectMapper MAPPER = strict().build();
+    /** The same, but reading the NaN and Infinity literals that Python's json module writes. */
+    private static final ObjectMapper NON_FINITE = strict()
+            .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
             .build();
+
+    private static JsonMapper.Builder strict() {
+        return JsonMapper.builder(new JsonFactory())
+                .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+                .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
+    }
 
     private final JsonNode node;
     private final String source;
@@ -55,8 +63,29 @@ public final class JsonValue {
 
     /** Parses {@code text}; {@code source} names it in errors (a file, {@code file:12}, "the request body"). */
     public static JsonValue parse(String text, String source) {
+        return parse(() -> MAPPER.readTree(text), source);
+    }
+
+    /** Parses UTF-8 bytes (a request or response body). */
+    public static JsonValue parse(byte[] utf8, String source) {
+        return parse(() -> MAPPER.readTree(utf8), source);
+    }
+
+    /**
+     * Parses UTF-8 bytes that may hold {@code NaN}, {@code Infinity} or {@code -Infinity} as
+     * numbers: a model's answer, whose validation names such a score instead of a parse error.
+     */
+    public static JsonValue parseAllowingNonFinite(byte[] utf8, String source) {
+        return parse(() -> NON_FINITE.readTree(utf8), source);
+    }
+
+    private interface TreeReader {
+        JsonNode read() throws IOException;
+    }
+
+    private static JsonValue parse(TreeReader reader, String source) {
         try {
-            JsonNode node = MAPPER.readTree(text);
+            JsonNode node = reader.read();
             if (node == null || node.isMissingNode()) {
                 throw new ContractException(source + ": empty, expected JSON");
             }
@@ -65,12 +94,9 @@ public final class JsonValue {
             String at = e.getLocation() == null ? ""
                     : " at line " + e.getLocation().getLineNr() + ", column " + e.getLocation().getColumnNr();
             throw new ContractException(source + ": not valid JSON: " + e.getOriginalMessage() + at);
+        } catch (IOException e) {
+            throw new ContractException(source + ": not valid JSON: " + e.getMessage());
         }
-    }
-
-    /** Parses UTF-8 bytes (a request or response body). */
-    public static JsonValue parse(byte[] utf8, String source) {
-        return parse(new String(utf8, StandardCharsets.UTF_8), source);
     }
 
     /** Reads and parses a UTF-8 file; errors name the file. */

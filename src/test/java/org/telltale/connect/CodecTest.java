@@ -34,12 +34,12 @@ class CodecTest {
 
     @Test
     void malformedNativeAnswersGetClearMessages() {
-        assertTrue(msg(() -> NativeCodec.parse(b("{\"labels\":[\"a\"],\"scores\":[[0.1,"))).startsWith("the response is not valid JSON"));
-        assertTrue(msg(() -> NativeCodec.parse(b("[1,2]"))).startsWith("the response is not a JSON object"));
-        assertTrue(msg(() -> NativeCodec.parse(b("{\"labels\":[1],\"scores\":[]}"))).startsWith("'labels' holds a non-string number"));
-        assertTrue(msg(() -> NativeCodec.parse(b("{\"labels\":[\"a\"],\"scores\":[[\"0.5\"]]}"))).startsWith("row 0 of 'scores' holds \"0.5\""));
+        assertTrue(msg(() -> NativeCodec.parse(b("{\"labels\":[\"a\"],\"scores\":[[0.1,"))).startsWith("the response: not valid JSON: Unexpected end-of-input"));
+        assertTrue(msg(() -> NativeCodec.parse(b("[1,2]"))).startsWith("the response: expected an object, found an array; response: [1,2]"));
+        assertTrue(msg(() -> NativeCodec.parse(b("{\"labels\":[1],\"scores\":[]}"))).startsWith("the response: labels[0]: expected a string, found the number 1; response: "));
+        assertTrue(msg(() -> NativeCodec.parse(b("{\"labels\":[\"a\"],\"scores\":[[\"0.5\"]]}"))).startsWith("the response: scores[0][0]: expected a number, found the string \"0.5\"; response: "));
         assertEquals("the model answered an error: out of memory", msg(() -> NativeCodec.parse(b("{\"error\":\"out of memory\"}"))));
-        assertEquals("the response is empty", msg(() -> NativeCodec.parse(b(""))));
+        assertEquals("the response: empty, expected JSON", msg(() -> NativeCodec.parse(b(""))));
     }
 
     @Test
@@ -98,7 +98,7 @@ class CodecTest {
         assertTrue(msg(() -> PipelineCodec.parse(b("[{\"label\":\"spam\",\"score\":0.8}]")))
                 .startsWith("the answer for text 0 is not a non-empty list"));
         assertTrue(msg(() -> PipelineCodec.parse(b("[[{\"label\":\"spam\",\"score\":\"high\"}]]")))
-                .startsWith("text 0 scores label 'spam' with \"high\", not a number"));
+                .startsWith("the response: [0][0].score: expected a number, found the string \"high\"; response: "));
         assertTrue(msg(() -> PipelineCodec.parse(b("{\"error\":\"model says no\"}"))).startsWith("the model answered an error"));
     }
 

@@ -146,14 +146,14 @@ class HttpFaultTest {
     @ParameterizedTest
     @EnumSource(Protocol.class)
     void truncatedJsonIsAClearError(Protocol p) throws Exception {
-        assertTrue(fails(p, null, Fault.TRUNCATED_JSON).contains("the response is not valid JSON"));
+        assertTrue(fails(p, null, Fault.TRUNCATED_JSON).contains("the response: not valid JSON: "));
     }
 
     @ParameterizedTest
     @EnumSource(Protocol.class)
     void garbageIsAClearError(Protocol p) throws Exception {
         String m = fails(p, null, Fault.GARBAGE_BYTES);
-        assertTrue(m.startsWith("batch 1 (documents 0–4): the response is not valid JSON"), m);
+        assertTrue(m.startsWith("batch 1 (documents 0–4): the response: not valid JSON: "), m);
     }
 
     @ParameterizedTest
