@@ -194,6 +194,34 @@ public final class JsonValue {
         return find(field).map(JsonValue::asNumber).orElse(null);
     }
 
+    /**
+     * A number that must be present and may be {@code null}: the writers of Telltale's contracts
+     * write a value that is not finite as {@code null}. Missing or mistyped is an error.
+     */
+    public Double nullableNumber(String field) {
+        present(field);
+        return optionalNumber(field);
+    }
+
+    /** As {@link #nullableNumber}, with {@code null} read as NaN. */
+    public double numberOrNaN(String field) {
+        Double v = nullableNumber(field);
+        return v == null ? Double.NaN : v;
+    }
+
+    /** A string that must be present and may be {@code null} (an unknown gold label). */
+    public String nullableString(String field) {
+        present(field);
+        return optionalString(field);
+    }
+
+    private void present(String field) {
+        requireObject();
+        if (!node.has(field)) {
+            throw at(field, "missing");
+        }
+    }
+
     public boolean bool(String field) {
         return get(field).asBool();
     }

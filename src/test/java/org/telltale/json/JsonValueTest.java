@@ -49,6 +49,21 @@ class JsonValueTest {
     }
 
     @Test
+    void aNullableNumberMustBePresent() {
+        assertEquals("x: n: missing", error(() -> JsonValue.parse("{}", "x").numberOrNaN("n")));
+    }
+
+    @Test
+    void aNullableNumberReadsNullAsNaN() {
+        assertEquals(Double.NaN, JsonValue.parse("{\"n\": null}", "x").numberOrNaN("n"));
+    }
+
+    @Test
+    void aNullableStringMustBePresent() {
+        assertEquals("x: gold: missing", error(() -> JsonValue.parse("{}", "x").nullableString("gold")));
+    }
+
+    @Test
     void theVersionCheckNamesTheFormatAndTheVersionsRead() {
         assertEquals("audit.json: version: telltale.audit version 2 is not supported (this Telltale reads version 1)",
                 error(() -> JsonValue.parse(AUDIT, "audit.json").version("telltale.audit", 1)));

@@ -361,16 +361,12 @@ public final class AuditJson {
 
     /** A number that must be present and may be {@code null} (written for a value that is not finite): NaN then. */
     static double number(JsonValue o, String field) {
-        Double v = nullable(o, field);
-        return v == null ? Double.NaN : v;
+        return o.numberOrNaN(field);
     }
 
     /** A number that must be present and may be {@code null}. */
     static Double nullable(JsonValue o, String field) {
-        if (!o.node().has(field)) {
-            throw o.at(field, "missing");
-        }
-        return o.optionalNumber(field);
+        return o.nullableNumber(field);
     }
 
     static Map<String, Double> numbers(JsonValue o) {

@@ -3,26 +3,24 @@ package org.telltale.report.json;
 import com.fasterxml.jackson.core.JsonEncoding;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.BufferedReader;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
 import java.io.OutputStream;
+import java.io.StringReader;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.telltale.TelltaleException;
 import org.telltale.explain.Explanation;
+import org.telltale.json.ContractException;
+import org.telltale.json.JsonValue;
 import org.telltale.text.Span;
 
 /**
@@ -48,7 +46,6 @@ public final class ExplanationsJson {
     public static final int OLDEST = 1;
 
     private static final JsonFactory FACTORY = new JsonFactory();
-    private static final ObjectMapper MAPPER = new ObjectMapper();
 
     private ExplanationsJson() {
     }
@@ -192,7 +189,8 @@ public final class ExplanationsJson {
     /**
      * Reads a {@code telltale.explanations} document, or a file of one explanation per line.
      *
-     * @throws TelltaleException naming the file (and line) when the content is not valid
+     * @throws TelltaleException naming the file (and line), the path and what was found when the
+     *         content breaks the contract
      */
     public static List<Explanation> read(Path file) {
         try (InputStream in = Files.newInputStream(file)) {
@@ -205,39 +203,20 @@ public final class ExplanationsJson {
     /** As {@link #read(Path)}; {@code source} names the input in error messages. */
     public static List<Explanation> read(InputStream in, String source) throws IOException {
         String content = new String(in.readAllBytes(), StandardCharsets.UTF_8);
-        String trimmed = content.strip();
-        if (trimmed.isEmpty()) {
+        if (content.isBlank()) {
             throw new TelltaleException(source + ": empty file, expected " + FORMAT + " JSON");
         }
-        JsonNode whole = null;
-        try {
-            whole = MAPPER.readTree(trimmed);
-        } catch (JsonProcessingException notOneDocument) {
-            // several lines, each an explanation: handled below
-        }
-        if (whole != null && whole.has("format")) {
-            String format = whole.path("format").asText();
-            if (!FORMAT.equals(format)) {
-                throw new TelltaleException(source + ": format is '" + format + "', expected '" + FORMAT + "'");
-            }
-            int version = whole.path("version").asInt(-1);
-            if (version < OLDEST || version > VERSION) {
-                throw new TelltaleException(source + ": version " + whole.path("version") + " of " + FORMAT
-                        + " is not supported (this Telltale reads versions " + OLDEST + " to " + VERSION + ")");
-            }
-            JsonNode list = whole.path("explanations");
-            if (!list.isArray()) {
-                throw new TelltaleException(source + ": 'explanations' must be an array");
-            }
+        JsonValue whole = wholeDocument(content, source);
+        if (whole != null) {
+            int version = whole.version(FORMAT, OLDEST, VERSION);
             List<Explanation> out = new ArrayList<>();
-            for (int i = 0; i < list.size(); i++) {
-                out.add(explanation(list.get(i), source + ": explanations[" + i + "]"));
+            for (JsonValue e : whole.array("explanations")) {
+                out.add(explanation(e, version));
             }
             return out;
         }
         List<Explanation> out = new ArrayList<>();
-        try (BufferedReader lines = new BufferedReader(new InputStreamReader(
-                new java.io.ByteArrayInputStream(content.getBytes(StandardCharsets.UTF_8)), StandardCharsets.UTF_8))) {
+        try (BufferedReader lines = new BufferedReader(new StringReader(content))) {
             String line;
             int number = 0;
             while ((line = lines.readLine()) != null) {
@@ -250,107 +229,81 @@ public final class ExplanationsJson {
         return out;
     }
 
-    /** One explanation from one line of JSON; {@code place} names it in error messages. */
-    public static Explanation fromLine(String line, String place) {
-        JsonNode node;
+    /** The content as one document when it is one JSON object with a {@code format}; else null (lines). */
+    private static JsonValue wholeDocument(String content, String source) {
+        JsonValue whole;
         try {
-            node = MAPPER.readTree(line);
-        } catch (JsonProcessingException e) {
-            throw new TelltaleException(place + ": not valid JSON: " + e.getOriginalMessage());
+            whole = JsonValue.parse(content, source);
+        } catch (ContractException notOneDocument) {
+            return null; // several lines, each an explanation
         }
-        return explanation(node, place);
+        return whole.node().isObject() && whole.node().has("format") ? whole : null;
     }
 
-    private static Explanation explanation(JsonNode n, String place) {
-        if (n == null || !n.isObject()) {
-            throw new TelltaleException(place + ": expected an explanation object");
-        }
-        String id = text(n, "id", place, true);
-        JsonNode fit = required(n, "fit", place);
+    /**
+     * One explanation from one line of JSON; {@code place} names it in error messages. A line
+     * carries no version: one with {@code interval} reads as version 2, one without as version 1.
+     */
+    public static Explanation fromLine(String line, String place) {
+        JsonValue node = JsonValue.parse(line, place);
+        return explanation(node, node.node().isObject() && node.node().has("interval") ? VERSION : OLDEST);
+    }
+
+    private static Explanation explanation(JsonValue n, int version) {
+        n.requireObject();
+        JsonValue fit = n.object("fit");
         List<Explanation.TermWeight> terms = new ArrayList<>();
-        JsonNode termList = required(n, "terms", place);
-        for (int i = 0; i < termList.size(); i++) {
-            JsonNode t = termList.get(i);
-            String at = place + " (id " + id + "): terms[" + i + "]";
+        for (JsonValue t : n.array("terms")) {
             List<Span> spans = new ArrayList<>();
-            for (JsonNode s : required(t, "spans", at)) {
-                if (!s.isArray() || s.size() != 2 || !s.get(0).canConvertToInt() || !s.get(1).canConvertToInt()) {
-                    throw new TelltaleException(at + ": a span must be [start, end], got " + s);
-                }
-                try {
-                    spans.add(new Span(s.get(0).asInt(), s.get(1).asInt()));
-                } catch (IllegalArgumentException bad) {
-                    throw new TelltaleException(at + ": " + bad.getMessage());
-                }
+            for (JsonValue s : t.array("spans")) {
+                spans.add(span(s));
             }
-            terms.add(new Explanation.TermWeight(text(t, "term", at, true), num(t, "weight", at), num(t, "low", at),
-                    num(t, "high", at), spans));
+            terms.add(new Explanation.TermWeight(t.string("term"), t.numberOrNaN("weight"), t.numberOrNaN("low"),
+                    t.numberOrNaN("high"), spans));
         }
-        JsonNode timing = n.path("timing");
+        JsonValue timing = n.object("timing");
         Map<String, Double> scores = new LinkedHashMap<>();
-        for (Iterator<Map.Entry<String, JsonNode>> it = n.path("scores").fields(); it.hasNext(); ) {
-            Map.Entry<String, JsonNode> s = it.next();
-            scores.put(s.getKey(), s.getValue().isNumber() ? s.getValue().asDouble() : Double.NaN);
-        }
-        String at = place + " (id " + id + ")";
-        Explanation.Method method = null;
-        JsonNode settings = n.get("settings");
-        if (settings != null && settings.isObject()) {
-            List<String> notes = new ArrayList<>();
-            n.path("notes").forEach(x -> notes.add(x.asText()));
-            JsonNode target = n.path("target");
-            // Version 1 files have no target (they explained the probability) and bootstrap resamples.
-            String interval = n.has("interval") ? n.path("interval").asText()
-                    : n.path("exact").asBoolean() ? "exact" : "bootstrap";
-            method = new Explanation.Method(settings.path("unit").asText(), settings.path("weighting").asText(),
-                    settings.path("select").asText(), optNum(settings, "bandwidth"), optNum(settings, "ridge"),
-                    settings.path("words").asInt(), settings.path("seed").asLong(), settings.path("analyzer").asText(),
-                    settings.path("filler").asText(""), optNum(settings, "level"), n.path("units").asInt(),
-                    n.path("calls").asInt(), n.path("exact").asBoolean(), optNum(n, "stability"), interval,
-                    target.path("kind").asText("probability"), target.path("source").asText("probabilities"),
-                    target.has("value") ? optNum(target, "value") : num(n, "score", at),
-                    target.has("saturated") ? optNum(target, "saturated") : Double.NaN,
-                    n.path("probes_to_go").asInt(-1), settings.path("sampling").asText("uniform"), notes);
-        }
-        return new Explanation(id, text(n, "label", at, true), num(n, "score", at), text(n, "predicted", at, false),
-                scores, required(n, "probes", at).asInt(),
-                new Explanation.Fit(num(fit, "intercept", at), num(fit, "r2", at), num(fit, "prediction", at)),
-                terms, new Explanation.Timing(timing.path("model_ms").asLong(), timing.path("total_ms").asLong()),
-                text(n, "text", at, false), text(n, "gold", at, false), method);
+        n.object("scores").fields().forEach((label, v) -> scores.put(label, v.node().isNull() ? Double.NaN : v.asNumber()));
+        double score = n.numberOrNaN("score");
+        Explanation.Method method = n.has("settings") ? method(n, version, score) : null;
+        return new Explanation(n.string("id"), n.string("label"), score, n.nullableString("predicted"), scores,
+                n.int32("probes"),
+                new Explanation.Fit(fit.numberOrNaN("intercept"), fit.numberOrNaN("r2"), fit.numberOrNaN("prediction")),
+                terms, new Explanation.Timing(timing.integer("model_ms"), timing.integer("total_ms")),
+                n.nullableString("text"), n.nullableString("gold"), method);
     }
 
-    private static JsonNode required(JsonNode n, String field, String place) {
-        JsonNode v = n.get(field);
-        if (v == null || v.isMissingNode()) {
-            throw new TelltaleException(place + ": missing field '" + field + "'");
-        }
-        return v;
+    /** How the explanation was computed; version 1 explained the probability, with bootstrap intervals. */
+    private static Explanation.Method method(JsonValue n, int version, double score) {
+        JsonValue settings = n.object("settings");
+        boolean v1 = version == OLDEST;
+        String interval = v1 ? (n.bool("exact") ? "exact" : "bootstrap") : n.string("interval");
+        JsonValue target = v1 ? null : n.object("target");
+        return new Explanation.Method(settings.string("unit"), settings.string("weighting"), settings.string("select"),
+                settings.numberOrNaN("bandwidth"), settings.numberOrNaN("ridge"), settings.int32("words"),
+                settings.integer("seed"), settings.string("analyzer"), settings.string("filler"),
+                settings.numberOrNaN("level"), n.int32("units"), n.int32("calls"), n.bool("exact"),
+                n.numberOrNaN("stability"), interval,
+                v1 ? "probability" : target.string("kind"),
+                v1 ? "probabilities" : target.string("source"),
+                v1 ? score : target.numberOrNaN("value"),
+                v1 ? Double.NaN : target.numberOrNaN("saturated"),
+                v1 ? -1 : n.int32("probes_to_go"),
+                v1 ? "uniform" : settings.string("sampling"),
+                n.strings("notes"));
     }
 
-    private static String text(JsonNode n, String field, String place, boolean needed) {
-        JsonNode v = n.get(field);
-        if (v == null || v.isNull()) {
-            if (needed) {
-                throw new TelltaleException(place + ": missing field '" + field + "'");
-            }
-            return null;
+    /** A span {@code [start, end]} with {@code 0 <= start <= end}. */
+    private static Span span(JsonValue s) {
+        List<JsonValue> ends = s.elements();
+        if (ends.size() != 2) {
+            throw s.here("expected a span [start, end]");
         }
-        return v.asText();
-    }
-
-    private static double num(JsonNode n, String field, String place) {
-        JsonNode v = required(n, field, place);
-        if (v.isNull()) {
-            return Double.NaN;
+        int start = ends.get(0).asInt32();
+        int end = ends.get(1).asInt32();
+        if (start < 0 || end < start) {
+            throw s.here("expected a span [start, end] with 0 <= start <= end");
         }
-        if (!v.isNumber()) {
-            throw new TelltaleException(place + ": field '" + field + "' must be a number, got " + v);
-        }
-        return v.asDouble();
-    }
-
-    private static double optNum(JsonNode n, String field) {
-        JsonNode v = n.get(field);
-        return v != null && v.isNumber() ? v.asDouble() : Double.NaN;
+        return new Span(start, end);
     }
 }
