@@ -9,8 +9,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.util.Base64;
 import java.util.List;
 import org.jsoup.Jsoup;
 import org.jsoup.nodes.Document;
@@ -75,10 +73,6 @@ class DocumentReportStructureTest {
         assertEquals(1, page.select("script").size(), "only the report's own script");
         assertTrue(page.select("img, iframe, object, embed, textarea, form, a[href^=javascript], base").isEmpty());
         assertTrue(page.select("svg[onload], b[onmouseover]").isEmpty());
-        for (Element el : page.getAllElements()) {
-            el.attributes().forEach(a -> assertFalse(a.getKey().toLowerCase(java.util.Locale.ROOT).startsWith("on"),
-                    "event handler attribute " + a + " on <" + el.tagName() + ">"));
-        }
         String shown = page.selectFirst("#doc-0 .tt-text").text();
         assertTrue(shown.contains(HostileTexts.TITLE_PAYLOAD), "payload readable as text");
         assertTrue(shown.contains(HostileTexts.IMG_PAYLOAD));
@@ -89,33 +83,13 @@ class DocumentReportStructureTest {
     }
 
     @Test
-    void contentSecurityPolicyAllowsExactlyTheInlineStyleAndScriptByHash() throws Exception {
-        Document page = Jsoup.parse(HOSTILE_HTML);
-        Element meta = page.selectFirst("head > meta[http-equiv=Content-Security-Policy]");
-        assertNotNull(meta, "CSP meta element");
-        String csp = meta.attr("content");
-        assertTrue(csp.startsWith("default-src 'none';"), csp);
-        assertFalse(csp.contains("unsafe-inline") || csp.contains("unsafe-eval") || csp.contains("*"), csp);
-        // CSP Level 3, hash-source: base64 of SHA-256 over the element's text, as UTF-8.
-        assertTrue(csp.contains("script-src 'sha256-" + sha256(page.selectFirst("script").data()) + "'"), csp);
-        assertTrue(csp.contains("style-src 'sha256-" + sha256(page.selectFirst("style").data()) + "'"), csp);
-        assertEquals(1, page.select("style").size());
-        assertTrue(page.select("[style]").isEmpty(), "style attributes would be refused by the policy");
-        assertTrue(page.head().child(0).is("meta[charset]"), "charset first, so the parser never guesses");
+    void passesTheChecksEveryReportPasses() throws Exception {
+        ReportChecks.safe(Jsoup.parse(HOSTILE_HTML));
     }
 
     @Test
-    void noResourceReferenceLeavesThePage() {
-        Document page = Jsoup.parse(HOSTILE_HTML);
-        for (Element el : page.select("[src], [href], [xlink:href], [srcset], [action], [poster], [data]")) {
-            for (String attr : List.of("src", "href", "xlink:href", "srcset", "action", "poster", "data")) {
-                String value = el.attr(attr);
-                assertTrue(value.isEmpty() || value.startsWith("#"), "<" + el.tagName() + " " + attr + "=" + value + ">");
-            }
-        }
-        assertTrue(page.select("link").isEmpty());
-        assertFalse(page.selectFirst("style").data().contains("url("), "no url() in the stylesheet");
-        assertFalse(page.selectFirst("style").data().contains("@import"));
+    void declaresItsCharsetFirstSoTheParserNeverGuesses() {
+        assertTrue(Jsoup.parse(HOSTILE_HTML).head().child(0).is("meta[charset]"));
     }
 
     @Test
@@ -174,10 +148,5 @@ class DocumentReportStructureTest {
                 collect(child, out);
             }
         }
-    }
-
-    private static String sha256(String text) throws Exception {
-        return Base64.getEncoder().encodeToString(
-                MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8)));
     }
 }

@@ -5,11 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.security.MessageDigest;
 import java.util.ArrayList;
-import java.util.Base64;
 import java.util.List;
 import org.jsoup.Jsoup;
 import org.jsoup.nodes.Document;
@@ -69,22 +66,20 @@ class OverlapReportTest {
     }
 
     @Test
-    void escapesDocumentTextIdsAndLabelsAndAllowsOnlyItsOwnStyleAndScript() throws Exception {
-        String html = OverlapReport.render(sample());
-        Document page = Jsoup.parse(html);
-        assertTrue(page.select("script").size() == 1, "only the report script");
-        assertTrue(page.select("img").isEmpty());
-        assertTrue(page.select("[onerror], [onmouseover]").isEmpty());
+    void passesTheChecksEveryReportPasses() throws Exception {
+        ReportChecks.safe(Jsoup.parse(OverlapReport.render(sample())));
+    }
+
+    @Test
+    void escapesDocumentTextIdsAndLabels() {
+        Document page = Jsoup.parse(OverlapReport.render(sample()));
         assertTrue(page.text().contains(HostileTexts.TITLE_PAYLOAD), "payload shown as text");
         assertFalse(page.select(".tt-ctl").isEmpty(), "bidi controls shown as badges");
-        // CSP Level 3 hash-source: the policy names the SHA-256 of the inline style's exact text.
-        String csp = page.select("meta[http-equiv=Content-Security-Policy]").attr("content");
-        String style = page.select("style").first().data();
-        String digest = Base64.getEncoder().encodeToString(
-                MessageDigest.getInstance("SHA-256").digest(style.getBytes(StandardCharsets.UTF_8)));
-        assertTrue(csp.contains("style-src 'sha256-" + digest + "'"), csp);
-        assertTrue(csp.startsWith("default-src 'none'"), csp);
-        assertTrue(style.contains("mark.tt-shared"), "overlap styles are inside the hashed sheet");
+    }
+
+    @Test
+    void overlapStylesAreInsideTheHashedSheet() {
+        assertTrue(Jsoup.parse(OverlapReport.render(sample())).select("style").first().data().contains("mark.tt-shared"));
     }
 
     @Test
