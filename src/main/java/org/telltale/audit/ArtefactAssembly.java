@@ -14,11 +14,11 @@ import org.telltale.text.Document;
 import org.telltale.text.Span;
 
 /**
- * Turns grouped terms into reported artefacts: the policy by artefact, the scrub of each artefact
- * alone, its severity from its own evidence, and its examples with every term of it marked
- * (docs/audit.md, "Artefacts", "Severity").
+ * Turns grouped terms into reported artefacts: the policy by artefact, the effect of its own scrub
+ * (rescored before, by {@link ScrubTest}), its severity from its own evidence, and its examples
+ * with every term of it marked (docs/audit.md, "Artefacts", "Severity").
  *
- * <p>Not thread-safe (the scrub test counts its calls).
+ * <p>Immutable and thread-safe.
  */
 final class ArtefactAssembly {
     /** Example documents an artefact keeps for the report. */
@@ -26,12 +26,10 @@ final class ArtefactAssembly {
 
     private final Policy policy;
     private final Rewriter rewriter;
-    private final ScrubTest scrubTest;
 
-    ArtefactAssembly(Policy policy, Rewriter rewriter, ScrubTest scrubTest) {
+    ArtefactAssembly(Policy policy, Rewriter rewriter) {
         this.policy = policy;
         this.rewriter = rewriter;
-        this.scrubTest = scrubTest;
     }
 
     /** What the scrub removes for a group. */
@@ -39,13 +37,25 @@ final class ArtefactAssembly {
         return new Rewriter.Target(group.kind(), group.key(), new LinkedHashSet<>(group.terms()));
     }
 
-    /** The artefact of {@code group}, its scrub run on {@code explained}. */
-    Artefact finish(ArtefactGrouping.Group group, List<ScrubTest.Scored> explained, List<Explanation> explanations,
+    /**
+     * Whether the policy accepts {@code group} as expected evidence (a rule for the artefact, or
+     * every one of its terms accepted): an accepted artefact is not scrubbed.
+     */
+    boolean accepted(ArtefactGrouping.Group group) {
+        Optional<Policy.Rule> rule = policy.matchArtefact(group.kind(), group.pattern());
+        boolean termsAccepted = group.members().stream().allMatch(FindingRules.Candidate::suppressed);
+        return rule.map(r -> r.status() == Policy.Status.ACCEPTED).orElse(termsAccepted);
+    }
+
+    /**
+     * The artefact of {@code group}, given {@code effect}, what removing it alone did to the
+     * explained documents assigned its label ({@link ScrubTest.Effect#NONE} when {@link #accepted}).
+     */
+    Artefact finish(ArtefactGrouping.Group group, ScrubTest.Effect effect, List<Explanation> explanations,
             Map<String, Document> documents) {
         Optional<Policy.Rule> rule = policy.matchArtefact(group.kind(), group.pattern());
         List<FindingRules.Candidate> members = group.members();
-        boolean termsAccepted = members.stream().allMatch(FindingRules.Candidate::suppressed);
-        boolean accepted = rule.map(r -> r.status() == Policy.Status.ACCEPTED).orElse(termsAccepted);
+        boolean accepted = accepted(group);
         boolean marked = rule.map(r -> r.status() == Policy.Status.ARTEFACT)
                 .orElse(members.stream().anyMatch(c -> c.rule().map(r -> r.status() == Policy.Status.ARTEFACT).orElse(false)));
         String status = accepted ? "accepted" : marked ? "artefact" : null;
@@ -53,7 +63,6 @@ final class ArtefactAssembly {
                 .map(c -> c.rule().map(Policy.Rule::note).orElse(null)).filter(n -> n != null).findFirst().orElse(null));
 
         Rewriter.Target target = target(group);
-        ScrubTest.Effect effect = accepted ? ScrubTest.Effect.NONE : scrubTest.artefact(group.label(), target, explained);
         boolean confirmed = SeverityRules.confirmed(effect.flips(), effect.meanDrop());
         FindingRules.Candidate strongest = members.stream()
                 .max(Comparator.comparingDouble((FindingRules.Candidate c) -> Double.isNaN(c.z()) ? Double.NEGATIVE_INFINITY : c.z()))

@@ -117,6 +117,20 @@ public final class Auditor {
         CorpusTerms count(Set<String> selected, List<String> labels, boolean gold);
     }
 
+    /**
+     * The scrub test's rescoring, done where the documents are: runs every job of {@code plan}
+     * ({@link ScrubTest#explained} on the explained documents, and with {@code --scrub-all}
+     * {@link ScrubTest#corpus} on the corpus) in parts, and answers the merged
+     * {@link ScrubEffects}. The decisions taken from them are the audit's, on the driver.
+     */
+    public interface Rescoring {
+        /**
+         * @param explained the explained documents with their original scores, for a front that
+         *                  holds them (a distributed front may rescore its own copies)
+         */
+        ScrubEffects rescore(ScrubPlan plan, List<ScrubTest.Scored> explained);
+    }
+
     /** Runs the audit over {@code corpus} (opened afresh for each pass), journaling into {@code journal}. */
     public Outcome run(Supplier<CorpusReader> corpus, Journal journal, String model, String corpusName) {
         long started = System.nanoTime();
@@ -127,27 +141,24 @@ public final class Auditor {
         Scored scored = new Scored(scoring.labels, scoring.documents, scoring.labelled, scoring.correct, scoring.skipped,
                 scoring.predictedCounts(), scoring.repeats, scoring.documentsById);
         TermCounting counting = (selected, labels, gold) -> countTerms(corpus, selected, labels, scoring, gold);
-        return decide(scored, explanations, counting, corpus,
+        Rescoring rescoring = (plan, explained) -> rescore(plan, explained, scoring.repeats, corpus);
+        return decide(scored, explanations, counting, rescoring,
                 () -> journal.retries() + (classifier.retries() - retriesSeen), model, corpusName, started);
     }
 
     /**
-     * Everything after explaining, on one machine: counts the selected terms (through
-     * {@code counting}), flags terms and groups them into artefacts, scrubs each artefact alone
-     * from the explained documents, scrubs each kind and all artefacts at once (with --scrub-all
-     * from the corpus of {@code scrubCorpus}), and picks documents for the reviewer.
-     * The single-machine audit and the Spark front both end here.
+     * Everything after explaining: counts the selected terms (through {@code counting}), flags
+     * terms and groups them into artefacts, plans the scrub test — each artefact alone on the
+     * explained documents, each kind and all artefacts at once on the explained documents or with
+     * --scrub-all on the corpus — and has {@code rescoring} run it, decides each artefact and the
+     * scrub rows from the effects, and picks documents for the reviewer. The single-machine audit
+     * and the Spark front both end here; only counting and rescoring run where the corpus is.
      *
-     * @param scrubCorpus the corpus for --scrub-all; may be null when the audit does not scrub all
-     * @param retries     the retries of the whole run, read when the result is made
-     * @param started     {@link System#nanoTime()} at the start of the run
+     * @param retries the retries of the whole run, read when the result is made
+     * @param started {@link System#nanoTime()} at the start of the run
      */
-    public Outcome decide(Scored scoring, List<Explanation> explanations, TermCounting counting,
-            Supplier<CorpusReader> scrubCorpus, java.util.function.LongSupplier retries, String model, String corpusName,
-            long started) {
-        if (settings.scrubAll() && scrubCorpus == null) {
-            throw new IllegalArgumentException("--scrub-all needs the corpus");
-        }
+    public Outcome decide(Scored scoring, List<Explanation> explanations, TermCounting counting, Rescoring rescoring,
+            java.util.function.LongSupplier retries, String model, String corpusName, long started) {
         List<String> labels = scoring.labels();
 
         TermWeights weights = new TermWeights();
@@ -163,23 +174,25 @@ public final class Auditor {
 
         FindingRules.Outcome rules = FindingRules.apply(weights, terms, prior, policy, settings.alpha());
         Rewriter rewriter = new Rewriter(analyzer, scoring.repeats()::isBoilerplate);
-        ScrubTest scrubTest = new ScrubTest(classifier, rewriter, settings.batch());
-        List<ScrubTest.Scored> explained = scored(explanations, labels, scoring.sampled());
+        List<ScrubTest.Scored> explained = new ArrayList<>();
+        for (Explanation e : explanations) {
+            explained.add(ScrubTest.Scored.of(scoring.sampled().get(e.id()), e, labels));
+        }
 
         List<ArtefactGrouping.Group> groups = ArtefactGrouping.group(rules.candidates(), terms);
-        progress.phase("scrubbing", groups.size());
-        ArtefactAssembly assembly = new ArtefactAssembly(policy, rewriter, scrubTest);
+        ArtefactAssembly assembly = new ArtefactAssembly(policy, rewriter);
+        ScrubJobs jobs = plan(groups, assembly);
+        progress.phase("scrubbing", -1);
+        ScrubEffects effects = rescoring.rescore(jobs.plan(), explained);
         List<AuditResult.Artefact> artefacts = new ArrayList<>();
         Map<String, String> artefactOfTerm = new HashMap<>();
-        Map<String, Rewriter.Target> targets = new HashMap<>();
-        for (ArtefactGrouping.Group group : groups) {
-            AuditResult.Artefact artefact = guarded("the explained documents while scrubbing the " + group.kind().key()
-                    + " artefact '" + group.pattern() + "'", () -> assembly.finish(group, explained, explanations,
-                    scoring.sampled()));
+        for (int i = 0; i < groups.size(); i++) {
+            ArtefactGrouping.Group group = groups.get(i);
+            int own = jobs.alone().get(i);
+            AuditResult.Artefact artefact = assembly.finish(group, own < 0 ? ScrubTest.Effect.NONE : effects.of(own),
+                    explanations, scoring.sampled());
             artefacts.add(artefact);
-            targets.put(artefact.id(), ArtefactAssembly.target(group));
             group.terms().forEach(t -> artefactOfTerm.put(t + '\u0000' + group.label(), artefact.id()));
-            progress.advance(1);
         }
         artefacts.sort(ArtefactAssembly.ORDER);
         List<AuditResult.TermStat> termStats = new ArrayList<>();
@@ -187,7 +200,7 @@ public final class Auditor {
             termStats.add(new AuditResult.TermStat(t.term(), t.label(), t.kind(), t.support(), t.importance(),
                     t.association(), t.pmi(), t.weight(), t.selectedIn(), artefactOfTerm.get(t.term() + '\u0000' + t.label())));
         }
-        List<Scrub> scrub = scrubKinds(artefacts, targets, scrubTest, explained, scrubCorpus);
+        List<Scrub> scrub = scrubRows(artefacts, jobs, effects);
         progress.done();
 
         List<SubmodularPick.Row> rows = new ArrayList<>();
@@ -372,84 +385,90 @@ public final class Auditor {
         return terms;
     }
 
-    private static List<ScrubTest.Scored> scored(List<Explanation> explanations, List<String> labels,
-            Map<String, Document> documents) {
-        List<ScrubTest.Scored> out = new ArrayList<>();
-        for (Explanation e : explanations) {
-            double[] row = new double[labels.size()];
-            for (int i = 0; i < labels.size(); i++) {
-                row[i] = e.scores().getOrDefault(labels.get(i), Double.NaN);
-            }
-            out.add(new ScrubTest.Scored(documents.get(e.id()), e.predicted(), row));
-        }
-        return out;
+    // ---- the scrub test: planned here, rescored where the documents are, decided here
+
+    /**
+     * The jobs of one audit's scrub test and where each decision finds its effect: per group its
+     * own job (-1 when the policy accepts it), per kind with open artefacts its job, and the job
+     * removing every open artefact at once (-1 when none is open).
+     */
+    private record ScrubJobs(ScrubPlan plan, List<Integer> alone, Map<ArtefactKind, Integer> kinds, int all) {
     }
 
-    // ---- pass 4 (with --scrub-all): scrub per kind and all at once
+    private ScrubJobs plan(List<ArtefactGrouping.Group> groups, ArtefactAssembly assembly) {
+        ScrubPlan.Builder plan = new ScrubPlan.Builder();
+        List<Integer> alone = new ArrayList<>();
+        Map<ArtefactKind, List<Rewriter.Target>> open = new EnumMap<>(ArtefactKind.class);
+        List<Rewriter.Target> every = new ArrayList<>();
+        for (ArtefactGrouping.Group group : groups) {
+            if (assembly.accepted(group)) {
+                alone.add(-1);
+                continue;
+            }
+            Rewriter.Target target = ArtefactAssembly.target(group);
+            alone.add(plan.alone(group.label(), target));
+            open.computeIfAbsent(group.kind(), k -> new ArrayList<>()).add(target);
+            every.add(target);
+        }
+        // The order of targets within a job does not change a rewrite: cuts are sorted before they are made.
+        Map<ArtefactKind, Integer> kinds = new EnumMap<>(ArtefactKind.class);
+        open.forEach((kind, targets) -> kinds.put(kind, plan.together(targets, settings.scrubAll())));
+        int all = every.isEmpty() ? -1 : plan.together(every, settings.scrubAll());
+        return new ScrubJobs(plan.build(), alone, kinds, all);
+    }
 
     /**
      * One row per kind with open artefacts, removing that kind's artefacts together, and one row
      * removing every open artefact at once: how much of the model's accuracy rests on them.
      */
-    private List<Scrub> scrubKinds(List<AuditResult.Artefact> artefacts, Map<String, Rewriter.Target> targets,
-            ScrubTest scrubTest, List<ScrubTest.Scored> explained, Supplier<CorpusReader> corpus) {
-        Map<ArtefactKind, List<AuditResult.Artefact>> byKind = new EnumMap<>(ArtefactKind.class);
-        List<AuditResult.Artefact> open = new ArrayList<>();
+    private List<Scrub> scrubRows(List<AuditResult.Artefact> artefacts, ScrubJobs jobs, ScrubEffects effects) {
+        Map<ArtefactKind, List<String>> byKind = new EnumMap<>(ArtefactKind.class);
+        List<String> open = new ArrayList<>();
         for (AuditResult.Artefact a : artefacts) {
             if (!a.suppressed()) {
-                byKind.computeIfAbsent(a.kind(), k -> new ArrayList<>()).add(a);
-                open.add(a);
+                byKind.computeIfAbsent(a.kind(), k -> new ArrayList<>()).add(a.id());
+                open.add(a.id());
             }
         }
         List<Scrub> out = new ArrayList<>();
-        for (Map.Entry<ArtefactKind, List<AuditResult.Artefact>> e : byKind.entrySet()) {
-            out.add(scrubRow(e.getKey().key(), Rewriter.artefactMode(e.getKey()), e.getValue(), targets, scrubTest,
-                    explained, corpus));
+        for (Map.Entry<ArtefactKind, List<String>> e : byKind.entrySet()) {
+            out.add(scrubRow(e.getKey().key(), Rewriter.artefactMode(e.getKey()), e.getValue(),
+                    effects.of(jobs.kinds().get(e.getKey()))));
         }
         if (!open.isEmpty()) {
-            out.add(scrubRow(AuditResult.ALL, byKind.size() == 1 ? out.get(0).mode() : "mixed", open, targets, scrubTest,
-                    explained, corpus));
+            out.add(scrubRow(AuditResult.ALL, byKind.size() == 1 ? out.get(0).mode() : "mixed", open,
+                    effects.of(jobs.all())));
         }
         return out;
     }
 
-    private Scrub scrubRow(String kind, String mode, List<AuditResult.Artefact> artefacts,
-            Map<String, Rewriter.Target> targets, ScrubTest scrubTest, List<ScrubTest.Scored> explained,
-            Supplier<CorpusReader> corpus) {
-        List<Rewriter.Target> removed = artefacts.stream().map(a -> targets.get(a.id())).toList();
-        String what = AuditResult.ALL.equals(kind) ? "all artefacts" : kind + " artefacts";
-        ScrubTest.Effect effect = settings.scrubAll()
-                ? scrubCorpus(what, removed, scrubTest, corpus)
-                : guarded("the explained documents while scrubbing " + what, () -> scrubTest.together(removed, explained));
-        return new Scrub(kind, mode, artefacts.stream().map(AuditResult.Artefact::id).toList(),
-                settings.scrubAll() ? "corpus" : "explained", effect.documents(), effect.flips(), effect.flipRate(),
-                effect.meanDrop(), effect.accuracyBefore(), effect.accuracyAfter());
+    private Scrub scrubRow(String kind, String mode, List<String> artefacts, ScrubTest.Effect effect) {
+        return new Scrub(kind, mode, artefacts, settings.scrubAll() ? "corpus" : "explained", effect.documents(),
+                effect.flips(), effect.flipRate(), effect.meanDrop(), effect.accuracyBefore(), effect.accuracyAfter());
     }
 
-    private ScrubTest.Effect scrubCorpus(String what, List<Rewriter.Target> targets, ScrubTest scrubTest,
+    /** The rescoring on one machine: the explained documents at hand, then with --scrub-all the corpus in chunks. */
+    private ScrubEffects rescore(ScrubPlan plan, List<ScrubTest.Scored> explained, LineRepeats repeats,
             Supplier<CorpusReader> corpus) {
-        ScrubTest.Effect sum = ScrubTest.Effect.NONE;
+        ScrubTest scrubTest = ScrubTest.of(classifier, analyzer, repeats, settings.batch());
+        ScrubEffects sum = guarded("the explained documents while scrubbing",
+                () -> scrubTest.explained(plan, explained.iterator()));
+        if (!plan.scrubsCorpus()) {
+            return sum;
+        }
         try (CorpusReader reader = corpus.get()) {
             List<Document> chunk = new ArrayList<>(settings.batch());
             while (reader.hasNext()) {
                 chunk.add(reader.next());
-                if (chunk.size() == settings.batch()) {
-                    sum = sum.plus(scrubChunk(what, targets, scrubTest, chunk));
-                    chunk.clear();
+                if (chunk.size() == settings.batch() || !reader.hasNext()) {
+                    List<Document> part = chunk;
+                    sum = sum.merge(guarded("documents '" + part.get(0).id() + "' to '" + part.get(part.size() - 1).id()
+                            + "' while scrubbing the corpus", () -> scrubTest.corpus(plan, part.iterator())));
+                    chunk = new ArrayList<>(settings.batch());
                 }
-            }
-            if (!chunk.isEmpty()) {
-                sum = sum.plus(scrubChunk(what, targets, scrubTest, chunk));
             }
         }
         return sum;
-    }
-
-    private static ScrubTest.Effect scrubChunk(String what, List<Rewriter.Target> targets, ScrubTest scrubTest,
-            List<Document> chunk) {
-        return guarded("documents '" + chunk.get(0).id() + "' to '"
-                + chunk.get(chunk.size() - 1).id() + "' while scrubbing " + what,
-                () -> scrubTest.togetherUnscored(targets, chunk));
     }
 
     /** Runs work on {@code place}; if the JVM runs out of stack or memory, the error names the place and the way on. */

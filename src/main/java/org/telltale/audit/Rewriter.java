@@ -55,36 +55,14 @@ final class Rewriter {
         return spans;
     }
 
-    /** {@code text} scrubbed of {@code terms} as {@code kind} prescribes; the same string when nothing matched. */
-    String scrub(String text, ArtefactKind kind, Set<String> terms) {
-        List<Span> hits = occurrences(text, terms);
-        if (hits.isEmpty()) {
-            return text;
-        }
-        if (modeOf(kind) == Mode.TERMS) {
-            return cut(text, hits);
-        }
-        List<Span> regions = new ArrayList<>();
-        if (kind == ArtefactKind.HEADER) {
-            regions.addAll(Places.headerRegions(text, TextLines.of(text)));
-        } else {
-            for (Span line : TextLines.of(text)) {
-                if (boilerplate.test(text.substring(line.start(), line.end()))) {
-                    regions.add(line);
-                }
-            }
-        }
-        List<Span> cuts = new ArrayList<>();
-        for (Span region : regions) {
-            if (hits.stream().anyMatch(region::overlaps)) {
-                cuts.add(TextLines.withTerminator(text, region));
-            }
-        }
-        return cut(text, cuts);
-    }
-
     /** What one artefact's scrub removes: its place (kind and key) wherever it holds one of its terms. */
-    record Target(ArtefactKind kind, String key, Set<String> terms) {
+    record Target(ArtefactKind kind, String key, Set<String> terms) implements java.io.Serializable {
+        private static final long serialVersionUID = 1L;
+
+        Target {
+            java.util.Objects.requireNonNull(kind, "kind");
+            terms = java.util.Collections.unmodifiableSet(new java.util.LinkedHashSet<>(terms));
+        }
     }
 
     /** How an artefact of {@code kind} is removed: whole lines, whole matches, or its terms. */

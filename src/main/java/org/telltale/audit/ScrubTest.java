@@ -1,39 +1,91 @@
 package org.telltale.audit;
 
+import java.io.Serializable;
 import java.util.ArrayList;
-import java.util.HashSet;
-import java.util.LinkedHashMap;
+import java.util.Arrays;
+import java.util.Iterator;
 import java.util.List;
-import java.util.Map;
-import java.util.Set;
+import java.util.Objects;
+import org.apache.lucene.analysis.Analyzer;
+import org.telltale.explain.Explanation;
 import org.telltale.model.ScoreMatrix;
 import org.telltale.model.TextClassifier;
 import org.telltale.text.Document;
-import org.telltale.text.TermIndex;
-import org.telltale.text.Unit;
-import org.telltale.text.UnitKind;
 
 /**
- * The counterfactual half of an audit: documents rewritten without flagged terms (or the lines
- * and blocks holding them) are scored again, and the change in predictions is measured.
+ * The counterfactual half of an audit, as a per-document step: documents rewritten without
+ * artefacts are scored again, and each rewrite's effect — a flip of the predicted label, the
+ * drop of the measured score, accuracy before and after — is added to its job's sums. Any part
+ * of the documents can run anywhere (one JVM, a Spark partition); the parts' {@link ScrubEffects}
+ * merge into the whole's, and the decisions are taken from them on the driver.
  *
- * <p>Not thread-safe (it counts); the classifier it calls must be.
+ * <p>Rewrites of several jobs share scoring calls of at most {@code batch} texts. Not
+ * thread-safe; the classifier it calls must be.
  */
-final class ScrubTest {
-    /** A document with the model's scores on its original text, in the model's label order. */
-    record Scored(Document doc, String predicted, double[] scores) {
+public final class ScrubTest {
+    /**
+     * A document with the model's scores on its original text, in the model's label order. Holds
+     * a copy of the scores; equal when document, prediction and scores are.
+     */
+    public record Scored(Document doc, String predicted, double[] scores) {
+        public Scored {
+            Objects.requireNonNull(doc, "doc");
+            Objects.requireNonNull(predicted, "predicted");
+            scores = scores.clone();
+        }
+
+        /** An explained document, its original scores read from its explanation in {@code labels}' order. */
+        public static Scored of(Document doc, Explanation explanation, List<String> labels) {
+            double[] row = new double[labels.size()];
+            for (int i = 0; i < labels.size(); i++) {
+                row[i] = explanation.scores().getOrDefault(labels.get(i), Double.NaN);
+            }
+            return new Scored(doc, explanation.predicted(), row);
+        }
+
+        /** A copy of the scores. */
+        @Override
+        public double[] scores() {
+            return scores.clone();
+        }
+
+        double score(int column) {
+            return scores[column];
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Scored s && doc.equals(s.doc) && predicted.equals(s.predicted)
+                    && Arrays.equals(scores, s.scores);
+        }
+
+        @Override
+        public int hashCode() {
+            return Objects.hash(doc, predicted, Arrays.hashCode(scores));
+        }
+
+        @Override
+        public String toString() {
+            return "Scored[doc=" + doc.id() + ", predicted=" + predicted + ", scores=" + Arrays.toString(scores) + "]";
+        }
     }
 
-    /** What removing something did to a set of documents; sums, so that parts can be merged. */
-    record Effect(int documents, int flips, double totalDrop, int labelled, int correctBefore, int correctAfter) {
-        static final Effect NONE = new Effect(0, 0, 0, 0, 0, 0);
+    /** What removing something did to a set of documents; sums, so that parts can be merged in any order. */
+    record Effect(int documents, int flips, ExactSum totalDrop, int labelled, int correctBefore, int correctAfter)
+            implements Serializable {
+        private static final long serialVersionUID = 1L;
+        static final Effect NONE = new Effect(0, 0, ExactSum.ZERO, 0, 0, 0);
+
+        Effect {
+            Objects.requireNonNull(totalDrop, "totalDrop");
+        }
 
         double flipRate() {
             return documents == 0 ? 0 : (double) flips / documents;
         }
 
         double meanDrop() {
-            return documents == 0 ? Double.NaN : totalDrop / documents;
+            return documents == 0 ? Double.NaN : totalDrop.value() / documents;
         }
 
         Double accuracyBefore() {
@@ -50,7 +102,7 @@ final class ScrubTest {
         }
 
         Effect plus(Effect o) {
-            return new Effect(documents + o.documents, flips + o.flips, totalDrop + o.totalDrop,
+            return new Effect(documents + o.documents, flips + o.flips, totalDrop.plus(o.totalDrop),
                     labelled + o.labelled, correctBefore + o.correctBefore, correctAfter + o.correctAfter);
         }
     }
@@ -58,184 +110,154 @@ final class ScrubTest {
     private final TextClassifier classifier;
     private final Rewriter rewriter;
     private final int batch;
-    private long calls;
 
     ScrubTest(TextClassifier classifier, Rewriter rewriter, int batch) {
-        this.classifier = classifier;
-        this.rewriter = rewriter;
+        if (batch < 1) {
+            throw new IllegalArgumentException("batch must be at least 1: " + batch);
+        }
+        this.classifier = Objects.requireNonNull(classifier, "classifier");
+        this.rewriter = Objects.requireNonNull(rewriter, "rewriter");
         this.batch = batch;
     }
 
     /**
-     * Removes the flagged terms of one label together from the documents the model assigned to
-     * that label, and gives, per flagged term, the effect on the documents that contain it: how
-     * many change their prediction and how far the label's score drops. The terms go together
-     * because one label's artefacts are often redundant — a case code and a reply address on the
-     * same ticket — and removing either alone would leave the other to carry the prediction.
+     * The scrub test as a distributed front builds it where its documents are: the audit's
+     * analyzer, the corpus' line counts (which lines are boilerplate) and its scoring batch.
      */
-    Map<String, Effect> group(String label, Set<String> terms, List<Scored> documents) {
-        List<Scored> changed = new ArrayList<>();
-        List<String> texts = new ArrayList<>();
-        for (Scored s : documents) {
-            if (!s.predicted().equals(label)) {
-                continue;
-            }
-            String rewritten = rewriter.scrub(s.doc().text(), ArtefactKind.CONTENT, terms);
-            if (!rewritten.equals(s.doc().text())) {
-                changed.add(s);
-                texts.add(rewritten);
-            }
-        }
-        Map<String, Effect> byTerm = new LinkedHashMap<>();
-        for (String term : terms) {
-            byTerm.put(term, Effect.NONE);
-        }
-        List<Effect> effects = perDocument(changed, texts, label);
-        for (int i = 0; i < changed.size(); i++) {
-            Set<String> present = new HashSet<>();
-            for (Unit unit : TermIndex.of(changed.get(i).doc().text(), rewriter.analyzer(), UnitKind.WORD).units()) {
-                present.add(unit.term());
-            }
-            for (String term : terms) {
-                if (present.contains(term)) {
-                    byTerm.merge(term, effects.get(i), Effect::plus);
+    public static ScrubTest of(TextClassifier classifier, Analyzer analyzer, LineRepeats repeats, int batch) {
+        return new ScrubTest(classifier, new Rewriter(analyzer, repeats::isBoilerplate), batch);
+    }
+
+    /**
+     * Runs the plan's jobs on explained {@code documents}, whose original scores are known: each
+     * job's rewrite of each document it applies to (those assigned its label, or all), scored
+     * when the rewrite changed the text.
+     */
+    public ScrubEffects explained(ScrubPlan plan, Iterator<Scored> documents) {
+        Tally tally = new Tally(plan);
+        while (documents.hasNext()) {
+            Scored s = documents.next();
+            for (int j = 0; j < plan.size(); j++) {
+                ScrubPlan.Job job = plan.job(j);
+                if (!job.corpus() && (job.label() == null || job.label().equals(s.predicted()))) {
+                    tally.rewrite(s, j);
                 }
             }
         }
-        return byTerm;
+        tally.flush();
+        return tally.effects();
     }
 
     /**
-     * Removes one artefact alone from the documents the model assigned to its {@code label} and
-     * measures the effect on those it changed: flips away from the label and the drop of its score.
+     * Runs the plan's corpus jobs ({@code --scrub-all}) on {@code documents}, whose original
+     * scores are not known: a document some rewrite changes is scored as it is, then rewritten.
      */
-    Effect artefact(String label, Rewriter.Target target, List<Scored> documents) {
-        List<Scored> changed = new ArrayList<>();
-        List<String> texts = new ArrayList<>();
-        for (Scored s : documents) {
-            if (!s.predicted().equals(label)) {
-                continue;
-            }
-            String rewritten = rewriter.scrub(s.doc().text(), List.of(target));
-            if (!rewritten.equals(s.doc().text())) {
-                changed.add(s);
-                texts.add(rewritten);
+    public ScrubEffects corpus(ScrubPlan plan, Iterator<Document> documents) {
+        Tally tally = new Tally(plan);
+        List<Document> chunk = new ArrayList<>(batch);
+        while (documents.hasNext()) {
+            chunk.add(documents.next());
+            if (chunk.size() == batch || !documents.hasNext()) {
+                corpusChunk(plan, chunk, tally);
+                chunk.clear();
             }
         }
-        return measure(changed, texts, label);
+        tally.flush();
+        return tally.effects();
     }
 
-    /** Removes {@code targets} together from every document and measures the effect on each one's own prediction. */
-    Effect together(List<Rewriter.Target> targets, List<Scored> documents) {
-        List<Scored> changed = new ArrayList<>();
-        List<String> texts = new ArrayList<>();
-        for (Scored s : documents) {
-            String rewritten = rewriter.scrub(s.doc().text(), targets);
-            if (!rewritten.equals(s.doc().text())) {
-                changed.add(s);
-                texts.add(rewritten);
-            }
-        }
-        return measure(changed, texts, null);
-    }
-
-    /** As {@link #together}, for documents whose original scores are not known yet (for {@code --scrub-all}). */
-    Effect togetherUnscored(List<Rewriter.Target> targets, List<Document> documents) {
+    private void corpusChunk(ScrubPlan plan, List<Document> chunk, Tally tally) {
         List<Document> changed = new ArrayList<>();
-        List<String> texts = new ArrayList<>();
-        for (Document d : documents) {
-            String rewritten = rewriter.scrub(d.text(), targets);
-            if (!rewritten.equals(d.text())) {
+        List<List<Rewrite>> rewrites = new ArrayList<>();
+        for (Document d : chunk) {
+            List<Rewrite> mine = new ArrayList<>();
+            for (int j = 0; j < plan.size(); j++) {
+                ScrubPlan.Job job = plan.job(j);
+                if (job.corpus()) {
+                    String text = rewriter.scrub(d.text(), job.targets());
+                    if (!text.equals(d.text())) {
+                        mine.add(new Rewrite(null, j, text, job.label()));
+                    }
+                }
+            }
+            if (!mine.isEmpty()) {
                 changed.add(d);
-                texts.add(rewritten);
+                rewrites.add(mine);
             }
         }
         if (changed.isEmpty()) {
-            return Effect.NONE;
+            return;
         }
         ScoreMatrix before = classifier.score(changed.stream().map(Document::text).toList(),
                 changed.stream().map(Document::id).toList());
-        calls++;
-        List<Scored> scored = new ArrayList<>();
         for (int i = 0; i < changed.size(); i++) {
-            scored.add(new Scored(changed.get(i), before.predicted(i), before.row(i)));
-        }
-        return measure(scored, texts, null);
-    }
-
-    /** Scrubs {@code terms} as {@code kind} prescribes from every document, and measures the effect. */
-    Effect kind(ArtefactKind kind, Set<String> terms, List<Scored> documents) {
-        List<Scored> changed = new ArrayList<>();
-        List<String> texts = new ArrayList<>();
-        for (Scored s : documents) {
-            String rewritten = rewriter.scrub(s.doc().text(), kind, terms);
-            if (!rewritten.equals(s.doc().text())) {
-                changed.add(s);
-                texts.add(rewritten);
+            Scored s = new Scored(changed.get(i), before.predicted(i), before.row(i));
+            for (Rewrite r : rewrites.get(i)) {
+                tally.add(new Rewrite(s, r.job(), r.text(), r.label()));
             }
         }
-        return measure(changed, texts, null);
+    }
+
+    /** One rewritten text waiting to be scored, for job {@code job}; {@code label} is the score measured, or null. */
+    private record Rewrite(Scored original, int job, String text, String label) {
+    }
+
+    /** The sums of each job, and the rewrites waiting for a scoring call. */
+    private final class Tally {
+        private final ScrubPlan plan;
+        private final Effect[] sums;
+        private final List<Rewrite> pending = new ArrayList<>(batch);
+
+        Tally(ScrubPlan plan) {
+            this.plan = plan;
+            this.sums = new Effect[plan.size()];
+            Arrays.fill(sums, Effect.NONE);
+        }
+
+        void rewrite(Scored s, int job) {
+            ScrubPlan.Job j = plan.job(job);
+            String text = rewriter.scrub(s.doc().text(), j.targets());
+            if (!text.equals(s.doc().text())) {
+                add(new Rewrite(s, job, text, j.label()));
+            }
+        }
+
+        void add(Rewrite r) {
+            pending.add(r);
+            if (pending.size() == batch) {
+                flush();
+            }
+        }
+
+        void flush() {
+            if (pending.isEmpty()) {
+                return;
+            }
+            ScoreMatrix after = classifier.score(pending.stream().map(Rewrite::text).toList(),
+                    pending.stream().map(r -> r.original().doc().id()).toList());
+            for (int i = 0; i < pending.size(); i++) {
+                Rewrite r = pending.get(i);
+                sums[r.job()] = sums[r.job()].plus(effect(r.original(), r.label(), after, i));
+            }
+            pending.clear();
+        }
+
+        ScrubEffects effects() {
+            return new ScrubEffects(Arrays.asList(sums));
+        }
     }
 
     /**
-     * The effect of scrubbing {@code documents}, whose original scores are not known yet: both
-     * versions of each document the rewrite changes are scored (for {@code --scrub-all}).
+     * One rewrite's effect: whether the predicted label changed, the drop of {@code label}'s score
+     * (of the document's own prediction when {@code label} is null), and whether the gold label
+     * was predicted before and after.
      */
-    Effect kindUnscored(ArtefactKind kind, Set<String> terms, List<Document> documents) {
-        List<Document> changed = new ArrayList<>();
-        List<String> texts = new ArrayList<>();
-        for (Document d : documents) {
-            String rewritten = rewriter.scrub(d.text(), kind, terms);
-            if (!rewritten.equals(d.text())) {
-                changed.add(d);
-                texts.add(rewritten);
-            }
-        }
-        if (changed.isEmpty()) {
-            return Effect.NONE;
-        }
-        ScoreMatrix before = classifier.score(changed.stream().map(Document::text).toList(),
-                changed.stream().map(Document::id).toList());
-        calls++;
-        List<Scored> scored = new ArrayList<>();
-        for (int i = 0; i < changed.size(); i++) {
-            scored.add(new Scored(changed.get(i), before.predicted(i), before.row(i)));
-        }
-        return measure(scored, texts, null);
-    }
-
-    /** Scoring calls made so far. */
-    long calls() {
-        return calls;
-    }
-
-    /**
-     * Scores {@code texts}, the rewrites of {@code originals}, and compares: flips of the predicted
-     * label, the mean drop of {@code label}'s score (of each document's own prediction when
-     * {@code label} is null), and accuracy before and after on the documents with a gold label.
-     */
-    Effect measure(List<Scored> originals, List<String> texts, String label) {
-        return perDocument(originals, texts, label).stream().reduce(Effect.NONE, Effect::plus);
-    }
-
-    /** As {@link #measure}, one effect per document. */
-    List<Effect> perDocument(List<Scored> originals, List<String> texts, String label) {
-        List<Effect> out = new ArrayList<>(texts.size());
-        for (int from = 0; from < texts.size(); from += batch) {
-            int to = Math.min(texts.size(), from + batch);
-            List<String> ids = originals.subList(from, to).stream().map(s -> s.doc().id()).toList();
-            ScoreMatrix after = classifier.score(texts.subList(from, to), ids);
-            calls++;
-            for (int i = from; i < to; i++) {
-                Scored s = originals.get(i);
-                int column = after.labelIndex(label == null ? s.predicted() : label);
-                String now = after.predicted(i - from);
-                String gold = s.doc().label();
-                out.add(new Effect(1, now.equals(s.predicted()) ? 0 : 1, s.scores()[column] - after.score(i - from, column),
-                        gold == null ? 0 : 1, gold != null && gold.equals(s.predicted()) ? 1 : 0,
-                        gold != null && gold.equals(now) ? 1 : 0));
-            }
-        }
-        return out;
+    static Effect effect(Scored original, String label, ScoreMatrix after, int row) {
+        int column = after.labelIndex(label == null ? original.predicted() : label);
+        String now = after.predicted(row);
+        String gold = original.doc().label();
+        return new Effect(1, now.equals(original.predicted()) ? 0 : 1,
+                ExactSum.ZERO.plus(original.score(column) - after.score(row, column)), gold == null ? 0 : 1,
+                gold != null && gold.equals(original.predicted()) ? 1 : 0, gold != null && gold.equals(now) ? 1 : 0);
     }
 }

@@ -19,6 +19,9 @@ import org.telltale.TelltaleException;
 import org.telltale.audit.Auditor;
 import org.telltale.audit.CorpusTerms;
 import org.telltale.audit.LineRepeats;
+import org.telltale.audit.ScrubEffects;
+import org.telltale.audit.ScrubPlan;
+import org.telltale.audit.ScrubTest;
 import org.telltale.audit.StratifiedSample;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
@@ -32,11 +35,16 @@ import scala.Tuple2;
 /**
  * The audit as Spark jobs. Model work runs by partition, each partition with its own connector:
  * scoring (with the line counts and a stratified sample of the partition), explaining the sampled
- * documents, and counting the selected terms. The driver merges the samples, reduces the counts,
- * and ends in {@link Auditor#decide}, the decisions of the single-machine audit. Every random
+ * documents, counting the selected terms, and rescoring scrubbed documents for the scrub test.
+ * The driver merges the samples, reduces the counts and the scrub effects, and ends in
+ * {@link Auditor#decide}, the decisions of the single-machine audit. Every random
  * choice derives from the seed and the document id, so a recomputed task changes nothing.
  */
 final class DistributedAudit {
+    /** The descriptions of the scrub test's jobs (the Spark UI shows them; a test finds its failures by them). */
+    static final String SCRUB_EXPLAINED = "scrub test: rescoring the explained documents";
+    static final String SCRUB_CORPUS = "scrub test: rescoring the corpus";
+
     private final JavaSparkContext context;
     private final AuditParams params;
 
@@ -59,14 +67,23 @@ final class DistributedAudit {
     record Passes(Auditor.Scored scored, List<Explanation> explanations, long retries) {
     }
 
+    /** What rescoring one partition for the scrub test yields: the plan's effects there, and the connector's retries. */
+    record Rescored(ScrubEffects effects, long retries) implements Serializable {
+        Rescored plus(Rescored o) {
+            return new Rescored(effects.merge(o.effects), retries + o.retries);
+        }
+    }
+
     private JavaRDD<PartitionScores> scores;
     private JavaRDD<CorpusRow> corpus;
     private Broadcast<Map<Long, Integer>> boilerplate;
     private long documents;
+    private List<Explained> explained;
 
     Passes scoreAndExplain(JavaRDD<CorpusRow> rows) {
         corpus = rows;
         AuditParams p = params;
+        context.setJobDescription("scoring the corpus");
         scores = rows.mapPartitions(it -> List.of(scorePartition(p, it)).iterator()).persist(StorageLevel.MEMORY_AND_DISK());
 
         // The reduced statistics of scoring: counts, labels, the merged sample; no document leaves its partition.
@@ -102,6 +119,7 @@ final class DistributedAudit {
         }
         // Line counts by key; only lines frequent enough to be boilerplate reach the driver.
         int least = LineRepeats.minRepeats(documents);
+        context.setJobDescription("counting repeated lines");
         Map<Long, Integer> frequent = new HashMap<>(scores.flatMapToPair(s -> s.lines().entrySet().stream()
                         .map(e -> new Tuple2<>(e.getKey(), e.getValue())).iterator())
                 .reduceByKey(Integer::sum)
@@ -115,13 +133,14 @@ final class DistributedAudit {
         Broadcast<Set<String>> wantedSet = context.broadcast(wanted);
         Map<String, Document> sampled = new HashMap<>();
         Map<String, String> lines = new HashMap<>();
-        rows.filter(r -> wantedSet.value().contains(r.id()))
+        context.setJobDescription("explaining the sample");
+        explained = rows.filter(r -> wantedSet.value().contains(r.id()))
                 .mapPartitions(it -> explainPartition(p, it))
-                .collect()
-                .forEach(e -> {
-                    sampled.put(e.row().id(), e.row().document());
-                    lines.put(e.row().id(), e.line());
-                });
+                .collect();
+        explained.forEach(e -> {
+            sampled.put(e.row().id(), e.row().document());
+            lines.put(e.row().id(), e.line());
+        });
         List<Explanation> explanations = new ArrayList<>();
         for (String id : ids) {
             String line = lines.get(id);
@@ -141,6 +160,7 @@ final class DistributedAudit {
         long total = documents;
         Set<String> terms = new HashSet<>(selected);
         List<String> labelList = List.copyOf(labels);
+        context.setJobDescription("counting the selected terms");
         CorpusTerms counted = corpus.zipPartitions(scores, (docs, scored) -> {
             Analyzer analyzer = Analyzers.byName(p.analyzer());
             LineRepeats repeats = LineRepeats.ofCounts(lines.value(), total);
@@ -162,6 +182,73 @@ final class DistributedAudit {
         });
         scores.unpersist();
         return counted;
+    }
+
+    /**
+     * The scrub test's rescoring by partition, each partition with its own connector
+     * ({@link ScrubTest}): the explained documents, spread over the cluster from the driver, which
+     * holds them with their explanations; and with --scrub-all the corpus where it is. The
+     * partitions' effects are exact sums, so their merge does not depend on how Spark splits or
+     * recomputes the work.
+     */
+    Rescored rescore(ScrubPlan plan, List<String> labels) {
+        AuditParams p = params;
+        Broadcast<Map<Long, Integer>> lines = boilerplate;
+        long total = documents;
+        List<String> labelList = List.copyOf(labels);
+        Rescored none = new Rescored(ScrubEffects.none(plan), 0);
+        int slices = Math.max(1, Math.min(explained.size(), context.defaultParallelism()));
+        context.setJobDescription(SCRUB_EXPLAINED);
+        Rescored sum = context.parallelize(explained, slices)
+                .mapPartitions(it -> List.of(rescoreExplained(p, plan, lines.value(), total, labelList, it)).iterator())
+                .fold(none, Rescored::plus);
+        if (plan.scrubsCorpus()) {
+            context.setJobDescription(SCRUB_CORPUS);
+            sum = sum.plus(corpus.mapPartitions(it -> List.of(rescoreCorpus(p, plan, lines.value(), total, it)).iterator())
+                    .fold(none, Rescored::plus));
+        }
+        return sum;
+    }
+
+    private static Rescored rescoreExplained(AuditParams p, ScrubPlan plan, Map<Long, Integer> lines, long documents,
+            List<String> labels, Iterator<Explained> rows) throws Exception {
+        if (!rows.hasNext()) {
+            return new Rescored(ScrubEffects.none(plan), 0);
+        }
+        List<ScrubTest.Scored> scored = new ArrayList<>();
+        while (rows.hasNext()) {
+            Explained e = rows.next();
+            Explanation explanation = ExplanationsJson.fromLine(e.line(), "explanation of document " + e.row().id());
+            scored.add(ScrubTest.Scored.of(e.row().document(), explanation, labels));
+        }
+        try (TextClassifier classifier = p.model().open(where(p))) {
+            ScrubTest test = ScrubTest.of(classifier, Analyzers.byName(p.analyzer()), LineRepeats.ofCounts(lines, documents),
+                    p.settings().batch());
+            return new Rescored(test.explained(plan, scored.iterator()), classifier.retries());
+        }
+    }
+
+    private static Rescored rescoreCorpus(AuditParams p, ScrubPlan plan, Map<Long, Integer> lines, long documents,
+            Iterator<CorpusRow> rows) throws Exception {
+        if (!rows.hasNext()) {
+            return new Rescored(ScrubEffects.none(plan), 0);
+        }
+        try (TextClassifier classifier = p.model().open(where(p))) {
+            ScrubTest test = ScrubTest.of(classifier, Analyzers.byName(p.analyzer()), LineRepeats.ofCounts(lines, documents),
+                    p.settings().batch());
+            Iterator<Document> docs = new Iterator<>() {
+                @Override
+                public boolean hasNext() {
+                    return rows.hasNext();
+                }
+
+                @Override
+                public Document next() {
+                    return rows.next().document();
+                }
+            };
+            return new Rescored(test.corpus(plan, docs), classifier.retries());
+        }
     }
 
     private static PartitionScores scorePartition(AuditParams p, Iterator<CorpusRow> rows) throws Exception {

@@ -34,8 +34,8 @@ import org.telltale.text.Analyzers;
  * clean, 3 artefacts at or above {@code --fail-on}, 1 error, 2 usage), the corpus read by Spark
  * from any path it reads, model work by partition, and the same {@code audit.json},
  * {@code explanations.jsonl} and {@code report.html} in {@code --out} on the driver's file
- * system. Spark reruns failed tasks, so there is no journal: {@code --resume} is refused, and
- * {@code --scrub-all} is not offered yet. {@code --master} sets the master for local mode.
+ * system. Spark reruns failed tasks, so there is no journal and {@code --resume} is refused.
+ * {@code --master} sets the master for local mode.
  */
 public final class SparkAudit {
     private static final List<String> VALUES;
@@ -70,9 +70,6 @@ public final class SparkAudit {
         if (o.has("--resume")) {
             throw new UsageException(RESUME_REFUSED);
         }
-        if (o.has("--scrub-all")) {
-            throw new UsageException("--scrub-all is not available in SparkAudit yet; run telltale audit --scrub-all");
-        }
         String failOn = o.get("--fail-on", "high");
         Severity gate;
         try {
@@ -88,7 +85,7 @@ public final class SparkAudit {
         AuditSettings settings;
         try {
             settings = new AuditSettings(o.integer("--sample", 200), o.integer("--probes", 1000), o.integer("--words", 10),
-                    o.integer("--picks", 5), false, failOn, AuditSettings.DEFAULT_ALPHA, model.batch(), analyzerSpec,
+                    o.integer("--picks", 5), o.has("--scrub-all"), failOn, AuditSettings.DEFAULT_ALPHA, model.batch(), analyzerSpec,
                     policyFile == null ? null : policyFile.getFileName().toString());
         } catch (IllegalArgumentException e) {
             throw OptionWords.usage(e);
@@ -123,14 +120,20 @@ public final class SparkAudit {
             DistributedAudit.Passes passes = distributed.scoreAndExplain(rows);
             progress(err, quiet, String.format(Locale.ROOT, "scored %d documents, explained %d; counting and scrubbing",
                     passes.scored().documents(), passes.explanations().size()));
-            // The driver's connector rescores the explained documents for the scrub test (a sample, not the corpus).
+            // The driver's connector only describes the model: the scrub test rescores on the executors.
             Auditor auditor = new Auditor(classifier, d -> {
                 throw new IllegalStateException("explanations come from the executors");
             }, new LineCodec(), analyzer, settings, seed, rules, Auditor.Progress.SILENT);
-            long driverRetries = classifier.retries();
+            long[] scrubRetries = {0};
+            List<String> labels = passes.scored().labels();
+            Auditor.Rescoring rescoring = (plan, explained) -> {
+                DistributedAudit.Rescored rescored = distributed.rescore(plan, labels);
+                scrubRetries[0] = rescored.retries();
+                return rescored.effects();
+            };
             outcome = auditor.decide(passes.scored(), passes.explanations(),
-                    (selected, labels, gold) -> distributed.countTerms(selected, labels, gold), null,
-                    () -> passes.retries() + classifier.retries() - driverRetries, classifier.describe(),
+                    (selected, labelList, gold) -> distributed.countTerms(selected, labelList, gold), rescoring,
+                    () -> passes.retries() + scrubRetries[0], classifier.describe(),
                     nameOf(corpusPath), started);
         }
         List<String> files = new ArrayList<>();

@@ -16,8 +16,8 @@ import org.apache.spark.util.TaskCompletionListener;
  * A Spark plugin for tests (configured with {@code -Dspark.plugins=…}): the first attempt of
  * partition 0 of every stage fails after it has done all its work — its shuffle output written or
  * its result computed — so Spark must discard that attempt and run the partition again. Each
- * planned failure leaves a file in the folder named by {@code -Dtelltale.test.failures}, so a
- * test can check that failures really happened. Local mode retries only with
+ * planned failure leaves a file in the folder named by {@code -Dtelltale.test.failures}, holding
+ * the description of the job it failed in, so a test can check that failures really happened and where. Local mode retries only with
  * {@code local[N,maxFailures]}.
  */
 public final class FirstAttemptFailure implements SparkPlugin {
@@ -43,6 +43,8 @@ public final class FirstAttemptFailure implements SparkPlugin {
                     return;
                 }
                 int stage = task.stageId();
+                // The job's description, as DistributedAudit sets it, tells which step failed.
+                String job = String.valueOf(task.getLocalProperty("spark.job.description"));
                 // A failing completion listener fails the task (Task.runTaskWithListeners), whereas
                 // exceptions from plugin callbacks are only logged.
                 task.addTaskCompletionListener((TaskCompletionListener) done -> {
@@ -51,7 +53,7 @@ public final class FirstAttemptFailure implements SparkPlugin {
                     }
                     try {
                         Files.createDirectories(folder);
-                        Files.writeString(folder.resolve("stage-" + stage + "-partition-0"), "failed\n");
+                        Files.writeString(folder.resolve("stage-" + stage + "-partition-0"), job + "\n");
                     } catch (IOException e) {
                         throw new UncheckedIOException(e);
                     }

@@ -22,7 +22,9 @@ import org.telltale.audit.UtilityQueues;
  * SparkAudit in local mode against {@code telltale audit}: the same audit.json but for the
  * timing and the model's description, the same explanations.jsonl but for timings, and the same exit code, on the
  * demo corpus and on a generated mailbox with planted header, address, identifier and boilerplate
- * artefacts — the second while the first attempt of a partition fails in every stage.
+ * artefacts — the second while the first attempt of a partition fails in every stage — and with
+ * --scrub-all while the first attempts of both scrub rescorings fail; bad option values and
+ * --resume are refused as one machine refuses them.
  */
 class SparkAuditIT {
     private static final ObjectMapper JSON = new ObjectMapper();
@@ -69,6 +71,37 @@ class SparkAuditIT {
         // The planted artefacts of UtilityQueues are found (the single-machine tests check their kinds).
         assertTrue(found.contains("ivr7") && found.contains("ledgerline.example"), found);
         assertEquals(360, single.path("summary").path("documents").asLong());
+    }
+
+    @Test
+    void scrubAllGivesTheSameAuditWhenTheFirstAttemptOfAPartitionFailsInEveryStage() throws Exception {
+        Path model = dir.resolve("mailbox-model.json");
+        Path training = UtilityQueues.write(UtilityQueues.generate(3, 150, true), dir.resolve("training.jsonl"));
+        Run trained = JarRun.telltale(dir, "train", "--corpus", training.toString(), "--out", model.toString());
+        assertEquals(0, trained.code(), trained.err());
+        Path corpus = UtilityQueues.write(UtilityQueues.generate(4, 120, true), dir.resolve("scrub-all.jsonl"));
+        Path failures = dir.resolve("scrub-failures");
+        JsonNode single = compare(corpus, model, "-Dspark.plugins=" + FirstAttemptFailure.class.getName()
+                + " -Dtelltale.test.failures=" + failures + " -Dspark.sql.files.maxPartitionBytes=16384", "local[2,4]",
+                "--sample", "40", "--probes", "300", "--words", "8", "--scrub-all");
+        List<String> failedJobs = new ArrayList<>();
+        try (Stream<Path> failed = Files.list(failures)) {
+            for (Path f : failed.toList()) {
+                failedJobs.add(Files.readString(f).strip());
+            }
+        }
+        assertTrue(failedJobs.contains(DistributedAudit.SCRUB_EXPLAINED), "a rescoring of the explained documents failed: "
+                + failedJobs);
+        assertTrue(failedJobs.contains(DistributedAudit.SCRUB_CORPUS), "a rescoring of the corpus failed: " + failedJobs);
+        JsonNode rows = single.path("scrub");
+        assertTrue(rows.size() > 0, single.toString());
+        for (JsonNode row : rows) {
+            assertEquals("corpus", row.path("scope").asText(), row.toString());
+        }
+        // The corpus scrub rewrote more documents than the sample holds.
+        JsonNode all = rows.get(rows.size() - 1);
+        assertEquals("all", all.path("kind").asText(), all.toString());
+        assertTrue(all.path("documents").asInt() > 40, all.toString());
     }
 
     @Test
