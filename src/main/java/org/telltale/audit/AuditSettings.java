@@ -37,12 +37,23 @@ public record AuditSettings(
     public AuditSettings {
         Objects.requireNonNull(failOn, "failOn");
         Objects.requireNonNull(analyzer, "analyzer");
-        if (sample < 1 || probes < 2 || words < 1 || picks < 0 || batch < 1) {
-            throw new IllegalArgumentException("audit settings out of range: sample=" + sample + ", probes=" + probes
-                    + ", words=" + words + ", picks=" + picks + ", batch=" + batch);
-        }
+        atLeast("sample", sample, 1);
+        atLeast("probes", probes, 2);
+        atLeast("words", words, 1);
+        atLeast("picks", picks, 0);
+        atLeast("batch", batch, 1);
         if (!(alpha > 0 && alpha < 1)) {
             throw new IllegalArgumentException("alpha must lie in (0, 1): " + alpha);
+        }
+    }
+
+    /**
+     * One setting, one message, in the core's own words ({@code "words must be at least 1: 0"});
+     * the command line maps the setting's name to its option once ({@code OptionWords}).
+     */
+    private static void atLeast(String setting, int value, int least) {
+        if (value < least) {
+            throw new IllegalArgumentException(setting + " must be at least " + least + ": " + value);
         }
     }
 
