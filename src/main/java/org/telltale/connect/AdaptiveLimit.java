@@ -4,57 +4,72 @@ import java.util.Arrays;
 
 /**
  * How many requests to keep in flight against a service whose capacity is unknown, found from
- * the answers alone. The method is TCP Vegas (L. S. Brakmo and L. L. Peterson, "TCP Vegas: End to
- * End Congestion Avoidance on a Global Internet", IEEE Journal on Selected Areas in Communications
- * 13(8), 1995), with requests in the place of packets:
+ * the answers alone: the limit grows while throughput grows, then holds a little more than the
+ * service can take at once. The method is BBR's model of a path (N. Cardwell, Y. Cheng, C. S.
+ * Gunn, S. H. Yeganeh and V. Jacobson, "BBR: Congestion-Based Congestion Control", ACM Queue 14(5),
+ * 2016), with requests in the place of packets, rather than TCP Vegas's reading of queueing from
+ * latency (L. S. Brakmo and L. L. Peterson, IEEE JSAC 13(8), 1995): latency against a model
+ * service grows with load long before anything waits for a worker (its own request handling, the
+ * client's cold code), so a latency signal stops short of the capacity; the delivery rate does not.
  *
  * <ul>
- *   <li>the base latency is the smallest round-trip time seen (Vegas's BaseRTT), over batches of
- *       about the full size, since a small last batch may answer faster;</li>
- *   <li>with {@code n} requests in flight and a measured latency {@code rtt}, the service holds
- *       about {@code q = n · (1 − base/rtt)} of them waiting (Vegas's Diff, counted in requests):
- *       throughput has stopped growing with {@code n} exactly when {@code q} grows;</li>
- *   <li>once per round (one latency's worth of answers, all sent at the current limit), with the
- *       round's smallest latency (so that the spread of service times is not taken for queueing),
- *       the limit grows by one while {@code q < α} and the demand fills it, shrinks by one while {@code q > β},
- *       else stays: a few requests always wait at the service, so its workers never idle while an
- *       answer travels back and the next request comes in;</li>
- *   <li>slow start, as in Vegas: until the first sign of queueing (in each of the last answers),
- *       the limit grows by one per answer (doubling per round), then drops to the capacity
- *       estimate {@code n − q} plus α;</li>
- *   <li>a 429 or 503 marks the in-flight count it was sent at as over capacity: the limit drops
- *       below it and stays below for {@link #CEILING_HOLD_NANOS} before probing one higher; a
- *       timeout halves the limit (TCP's multiplicative decrease). One cut per round, as TCP does
- *       once per window: only requests sent after the last cut can cut again.</li>
+ *   <li><b>Delivery rate</b> (BBR's per-packet sample): an answer that took {@code rtt}, during
+ *       which {@code d} answers arrived (itself included), says the service delivered
+ *       {@code d / rtt}. A round ends with the first answer to a request sent after it began (one
+ *       round trip); the median of its samples is its rate, and the best rate of the last
+ *       {@link #RATE_ROUNDS} rounds is the service's capacity (BBR's BtlBw filter). A round in
+ *       which the demand did not fill the limit counts only if it delivered more.</li>
+ *   <li><b>Pipe</b>: the capacity times the smallest latency of a full batch (BBR's BDP with its
+ *       RTprop): how many requests the service holds at capacity with none waiting.</li>
+ *   <li><b>Startup</b> (BBR's STARTUP): while the demand fills the limit, one more per answer,
+ *       which doubles it per round trip; it ends when the delivery rate has not grown by a quarter
+ *       in two rounds (BBR waits three), or in one round when it grew less than 5 % or every answer
+ *       of the round took more than twice the smallest latency; or at the first 429, 503 or timeout.
+ *       So a large capacity is reached in a few round trips, not one more per round.</li>
+ *   <li><b>Steady state</b>: the limit is {@link #PIPE_GAIN} times the pipe (at least one more):
+ *       a few requests wait at the service, so its workers do not idle while an answer travels
+ *       back and the next request comes in, and the extra latency of a loaded service (which the
+ *       smallest latency leaves out) is covered. BBR keeps twice the pipe; one and a half keeps
+ *       the wait shorter. Once per round in which the demand filled the limit, the limit moves
+ *       toward that target by at most an eighth (at least one).</li>
+ *   <li><b>Overload</b>: a 429 or 503 marks the in-flight count it was sent at as over capacity: the
+ *       limit stays below it for {@link #CEILING_HOLD_NANOS} before probing one higher per round; a
+ *       timeout halves it (TCP's multiplicative decrease), held likewise. One cut per round trip, as
+ *       TCP cuts once per window: only requests sent after the last cut can cut again.</li>
  * </ul>
- * α = 1 and β = max(2, limit / 8) are our choice (Vegas uses 1–3 packets): the upper bound grows
- * with the limit so that latency jitter on a busy client does not make a large limit oscillate.
  *
- * <p>Not thread-safe: {@link InFlightGate} calls it under its lock. Times are in nanoseconds
- * from any fixed origin, so tests drive it with a made-up clock.
+ * <p>The smallest latency is kept for the connector's life (BBR renews it every 10 s by draining
+ * the queue; an audit is short and its service assumed steady): a service that slows down shows
+ * it by 429, 503 or timeouts. Not thread-safe: {@link InFlightGate} calls it under its lock. Times
+ * are in nanoseconds from any fixed origin, so tests drive it with a made-up clock.
  */
 final class AdaptiveLimit implements InFlightGate.Policy {
-    static final int ALPHA = 1;
-    /** How long a limit stays below an in-flight count that drew a 429 or 503 before probing again. */
+    /** How long a limit stays below an in-flight count that drew a 429, 503 or timeout before probing again. */
     static final long CEILING_HOLD_NANOS = 10_000_000_000L;
-    /** Answers in a round at least, so that its median latency means something. */
-    static final int MIN_ROUND = 4;
+    /** Rounds over which the best delivery rate is the service's capacity. */
+    static final int RATE_ROUNDS = 10;
+    /** The limit in steady state, in pipes. */
+    static final double PIPE_GAIN = 1.5;
+    /** Growth of the delivery rate per round below which startup counts a round as flat. */
+    static final double STARTUP_GROWTH = 1.25;
 
     private final int max;
     private int limit;
-    private boolean slowStart = true;
-    private long baseRtt = Long.MAX_VALUE;
+    private boolean startup = true;
+    private double startupBest;
+    private int flatRounds;
     private int fullBatch;
     private int ceiling;
     private long ceilingSince;
-    private long lastChange = Long.MIN_VALUE;
     private long lastCut = Long.MIN_VALUE;
-    private long[] roundRtts = new long[16];
-    private int roundCount;
-    private long roundInFlight;
+    private long baseRtt = Long.MAX_VALUE;
+    private final double[] roundRates = new double[RATE_ROUNDS];
+    private int rounds;
+    private long roundStart = Long.MIN_VALUE;
+    private double[] roundSamples = new double[16];
+    private int roundAnswers;
     private boolean roundLimited;
-    private final double[] recent = new double[3];
-    private int recentCount;
+    private long roundMinRtt = Long.MAX_VALUE;
 
     AdaptiveLimit(int initial, int max) {
         if (max < 1) {
@@ -80,110 +95,129 @@ final class AdaptiveLimit implements InFlightGate.Policy {
         return true;
     }
 
-    /** The base latency so far, or -1 before the first answer. */
+    /** Whether the limit is still in its startup (doubling per round trip). */
+    boolean inStartup() {
+        return startup;
+    }
+
+    /** The smallest latency so far of a batch of about full size, or -1 before the first. */
     long baseRtt() {
         return baseRtt == Long.MAX_VALUE ? -1 : baseRtt;
     }
 
+    /** The service's capacity as measured (answers per second): the best delivery rate of the last rounds. */
+    double capacityPerSecond() {
+        return capacity() * 1e9;
+    }
+
+    /** Requests the service holds at its capacity with none waiting: capacity × smallest latency; 0 before a round. */
+    double pipe() {
+        return baseRtt == Long.MAX_VALUE ? 0 : capacity() * baseRtt;
+    }
+
     @Override
-    public void answered(long now, long sentAt, long rtt, int size, int inFlightAtSend, boolean demandWaiting) {
-        if (size > 2 * fullBatch) {
-            fullBatch = size; // batches grew: the old base latency belonged to smaller work
-            baseRtt = Long.MAX_VALUE;
-        } else if (size * 2 < fullBatch) {
-            return; // a small batch says little about a full one's latency
-        }
-        baseRtt = Math.min(baseRtt, Math.max(1, rtt));
-        double queued = inFlightAtSend * (1 - (double) baseRtt / Math.max(1, rtt));
-        boolean limited = demandWaiting || inFlightAtSend >= limit;
-        if (slowStart) {
-            recent[recentCount++ % recent.length] = queued;
-            double typical = min(recent, Math.min(recentCount, recent.length));
-            if (recentCount >= 2 && typical > beta()) {
-                slowStart = false;
-                change(now, (int) Math.round(inFlightAtSend - typical) + ALPHA);
-            } else if (limited) {
-                change(now, limit + 1);
-            }
-            return;
-        }
-        if (sentAt < lastChange) {
-            return; // sent under an older limit: not this round's evidence
-        }
-        if (roundCount == roundRtts.length) {
-            roundRtts = Arrays.copyOf(roundRtts, 2 * roundCount);
-        }
-        roundRtts[roundCount++] = rtt;
-        roundInFlight += inFlightAtSend;
+    public void answered(long now, InFlightGate.Answer a) {
+        boolean limited = a.demandWaiting() || a.inFlightAtSend() >= limit;
         roundLimited |= limited;
-        if (roundCount < Math.max(MIN_ROUND, limit)) {
+        if (a.size() > 2 * fullBatch) {
+            fullBatch = a.size(); // batches grew: the old latency belonged to smaller work
+            baseRtt = Long.MAX_VALUE;
+        }
+        boolean full = a.size() * 2 >= fullBatch;
+        if (full) {
+            baseRtt = Math.min(baseRtt, Math.max(1, a.rtt()));
+            roundMinRtt = Math.min(roundMinRtt, Math.max(1, a.rtt()));
+        }
+        if (startup && limited) {
+            limit = clamp(limit + 1);
+        }
+        if (roundStart == Long.MIN_VALUE) {
+            startRound(now); // the first answer opens the first round
             return;
         }
-        long typicalRtt = minOf(roundRtts, roundCount);
-        double meanInFlight = (double) roundInFlight / roundCount;
-        double roundQueued = meanInFlight * (1 - (double) baseRtt / Math.max(1, typicalRtt));
-        boolean grow = roundQueued < ALPHA && roundLimited;
+        if (full) {
+            if (roundAnswers == roundSamples.length) {
+                roundSamples = Arrays.copyOf(roundSamples, 2 * roundAnswers);
+            }
+            roundSamples[roundAnswers++] = Math.max(1, a.deliveredSince()) / (double) Math.max(1, a.rtt());
+        }
+        if (a.sentAt() >= roundStart && roundAnswers > 0) {
+            endRound(now); // the first answer to a request sent after the round began
+        }
+    }
+
+    private void endRound(long now) {
+        Arrays.sort(roundSamples, 0, roundAnswers);
+        double rate = roundSamples[roundAnswers / 2];
+        double c = capacity();
+        if (roundLimited || rate > c) {
+            roundRates[rounds++ % RATE_ROUNDS] = rate;
+            c = capacity();
+        }
         if (ceiling < max && now - ceilingSince > CEILING_HOLD_NANOS) {
             ceiling++;
             ceilingSince = now;
         }
-        if (roundQueued > beta()) {
-            change(now, limit - 1);
-        } else if (grow && limit < ceiling) {
-            change(now, limit + 1);
-        } else {
-            newRound(now);
+        if (startup) {
+            if (rate >= STARTUP_GROWTH * startupBest) {
+                startupBest = rate;
+                flatRounds = 0;
+            } else if (roundLimited) {
+                boolean queued = roundMinRtt != Long.MAX_VALUE && roundMinRtt > 2 * baseRtt;
+                flatRounds += rate < 1.05 * startupBest || queued ? 2 : 1;
+            }
+            if (flatRounds >= 2) {
+                startup = false;
+                limit = clamp(target());
+            }
+        } else if (roundLimited) {
+            int step = Math.max(1, limit / 8);
+            int t = target();
+            limit = clamp(t > limit ? Math.min(t, limit + step) : Math.max(t, limit - step));
         }
+        startRound(now);
+    }
+
+    private void startRound(long now) {
+        roundStart = now;
+        roundAnswers = 0;
+        roundLimited = false;
+        roundMinRtt = Long.MAX_VALUE;
+    }
+
+    /** {@link #PIPE_GAIN} pipes, at least one more than the pipe. */
+    private int target() {
+        double p = pipe();
+        return (int) Math.max(Math.round(p) + 1, Math.round(PIPE_GAIN * p));
+    }
+
+    private double capacity() {
+        double c = 0;
+        for (int i = 0; i < Math.min(rounds, RATE_ROUNDS); i++) {
+            c = Math.max(c, roundRates[i]);
+        }
+        return c;
     }
 
     @Override
     public void overloaded(long now, long sentAt, int inFlightAtSend, boolean timedOut) {
-        slowStart = false;
+        startup = false;
         if (timedOut) {
             if (sentAt >= lastCut) {
                 lastCut = now;
-                change(now, limit / 2);
+                ceiling = Math.max(1, limit / 2);
+                ceilingSince = now;
+                limit = clamp(limit / 2);
             }
             return;
         }
         // The service refused at this many in flight: stay below it for a while.
         ceiling = Math.min(ceiling, Math.max(1, inFlightAtSend - 1));
         ceilingSince = now; // every refusal restarts the hold
-        if (limit > ceiling) {
-            change(now, ceiling);
-        }
+        limit = clamp(limit);
     }
 
-    private double beta() {
-        return Math.max(2.0, limit / 8.0);
-    }
-
-    private void change(long now, int to) {
-        limit = Math.max(1, Math.min(Math.min(max, ceiling), to));
-        lastChange = now;
-        newRound(now);
-    }
-
-    private void newRound(long now) {
-        roundCount = 0;
-        roundInFlight = 0;
-        roundLimited = false;
-        lastChange = Math.max(lastChange, now);
-    }
-
-    private static double min(double[] v, int n) {
-        double m = Double.MAX_VALUE;
-        for (int i = 0; i < n; i++) {
-            m = Math.min(m, v[i]);
-        }
-        return m;
-    }
-
-    private static long minOf(long[] v, int n) {
-        long m = Long.MAX_VALUE;
-        for (int i = 0; i < n; i++) {
-            m = Math.min(m, v[i]);
-        }
-        return m;
+    private int clamp(int n) {
+        return Math.max(1, Math.min(Math.min(max, ceiling), n));
     }
 }

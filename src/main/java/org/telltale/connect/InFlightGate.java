@@ -24,8 +24,8 @@ final class InFlightGate {
 
         boolean adaptive();
 
-        /** A request sent at {@code sentAt} with {@code inFlightAtSend} in flight was answered after {@code rtt}. */
-        default void answered(long now, long sentAt, long rtt, int size, int inFlightAtSend, boolean demandWaiting) {
+        /** A request was answered at {@code now}. */
+        default void answered(long now, Answer answer) {
         }
 
         /** A request was refused (429, 503) or timed out. */
@@ -56,8 +56,21 @@ final class InFlightGate {
         };
     }
 
-    /** One admitted request: when it was sent and how many were in flight then, itself included. */
-    record Ticket(long sentAt, int inFlight) {
+    /**
+     * One admitted request: when it was sent, how many were in flight then (itself included), and
+     * how many answers had arrived before it.
+     */
+    record Ticket(long sentAt, int inFlight, long delivered) {
+    }
+
+    /**
+     * What one answer says about the service: a request of {@code size} texts sent at {@code sentAt}
+     * with {@code inFlightAtSend} in flight came back after {@code rtt} with {@code inFlightAtAnswer}
+     * in flight (itself included); {@code deliveredSince} answers arrived meanwhile, itself included;
+     * {@code demandWaiting}: work was waiting for a place.
+     */
+    record Answer(long sentAt, long rtt, int size, int inFlightAtSend, int inFlightAtAnswer, int deliveredSince,
+            boolean demandWaiting) {
     }
 
     private final ReentrantLock lock = new ReentrantLock(true);
@@ -71,6 +84,7 @@ final class InFlightGate {
     private int prepared;
     private int waiting;
     private int peak;
+    private long delivered;
     private long lastEvent = System.nanoTime();
 
     InFlightGate(Policy policy) {
@@ -123,7 +137,7 @@ final class InFlightGate {
             }
             inFlight++;
             peak = Math.max(peak, inFlight);
-            return new Ticket(System.nanoTime(), inFlight);
+            return new Ticket(System.nanoTime(), inFlight, delivered);
         } finally {
             lock.unlock();
         }
@@ -135,10 +149,12 @@ final class InFlightGate {
         try {
             long now = System.nanoTime();
             account();
-            inFlight--;
+            delivered++;
             if (measured) {
-                policy.answered(now, t.sentAt(), now - t.sentAt(), size, t.inFlight(), waiting > 0);
+                policy.answered(now, new Answer(t.sentAt(), now - t.sentAt(), size, t.inFlight(), inFlight,
+                        (int) Math.min(Integer.MAX_VALUE, delivered - t.delivered()), waiting > 0));
             }
+            inFlight--;
             freed.signalAll();
         } finally {
             lock.unlock();
@@ -176,7 +192,7 @@ final class InFlightGate {
     Ticket again(Ticket kept) {
         lock.lock();
         try {
-            return new Ticket(System.nanoTime(), inFlight);
+            return new Ticket(System.nanoTime(), inFlight, delivered);
         } finally {
             lock.unlock();
         }
