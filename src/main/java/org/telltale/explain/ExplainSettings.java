@@ -26,6 +26,9 @@ import org.telltale.text.UnitKind;
  * @param splitHalf  also fit each half of the probes and report their agreement (two extra fits)
  * @param maxUnits   the most units one explanation covers; a longer document keeps its most
  *                   frequent words (or first occurrences or lines) and says so in a note
+ * @param chooseBandwidth choose σ per document from the probes ({@link BandwidthChoice}), drawing
+ *                   them for {@code bandwidth} as the proposal
+ * @param pairing    whether drawn probes come in antithetic pairs
  */
 public record ExplainSettings(
         int words,
@@ -43,7 +46,9 @@ public record ExplainSettings(
         Target target,
         Sampling sampling,
         boolean splitHalf,
-        int maxUnits) {
+        int maxUnits,
+        boolean chooseBandwidth,
+        Pairing pairing) {
 
     /** The {@link #probes} value that asks for the adaptive budget. */
     public static final int AUTO = 0;
@@ -51,7 +56,7 @@ public record ExplainSettings(
     public static final int ALL_UNITS = Integer.MAX_VALUE;
     /** The fixed budget used unless asked otherwise. */
     public static final int DEFAULT_PROBES = 2000;
-    /** σ = 0.25: see docs/method.md, "Kernels", for why. */
+    /** σ = 0.25, the proposal the probes are drawn for: see docs/method.md, "Kernels", for why. */
     public static final double DEFAULT_BANDWIDTH = 0.25;
     /** Beyond this many units a document is capped: see docs/method.md, "Long documents". */
     public static final int DEFAULT_MAX_UNITS = 2000;
@@ -63,6 +68,7 @@ public record ExplainSettings(
         Objects.requireNonNull(analyzer, "analyzer");
         Objects.requireNonNull(target, "target");
         Objects.requireNonNull(sampling, "sampling");
+        Objects.requireNonNull(pairing, "pairing");
         filler = filler == null ? "" : filler;
         if (words < 1) {
             throw new UsageException("words must be at least 1: " + words);
@@ -88,13 +94,14 @@ public record ExplainSettings(
     }
 
     /**
-     * Ten words, 2,000 probes, word units, forward selection, σ = 0.25, cosine kernel with the
-     * removed count sampled to match it, seed 1.
+     * Ten words, 2,000 probes, word units, forward selection, cosine kernel with the removed count
+     * sampled to match σ = 0.25 and σ then chosen per document from the probes
+     * ({@link BandwidthChoice}), seed 1.
      */
     public static ExplainSettings defaults() {
         return new ExplainSettings(10, DEFAULT_PROBES, 4000, UnitKind.WORD, Selection.FORWARD, DEFAULT_BANDWIDTH,
                 Weighting.COSINE, "standard", 1L, "", 1.0, 0.95, Target.AUTO, Sampling.KERNEL, false,
-                DEFAULT_MAX_UNITS);
+                DEFAULT_MAX_UNITS, true, Pairing.NONE);
     }
 
     public boolean adaptive() {
@@ -112,66 +119,74 @@ public record ExplainSettings(
     }
 
     public ExplainSettings withWords(int v) {
-        return new ExplainSettings(v, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(v, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withProbes(int v) {
-        return new ExplainSettings(words, v, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, v, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withProbeCap(int v) {
-        return new ExplainSettings(words, probes, v, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, v, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withUnit(UnitKind v) {
-        return new ExplainSettings(words, probes, probeCap, v, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, v, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withSelect(Selection v) {
-        return new ExplainSettings(words, probes, probeCap, unit, v, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, v, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withBandwidth(double v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, v, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, v, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withWeighting(Weighting v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, v, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, v, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withAnalyzer(String v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, v, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, v, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withSeed(long v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, v, filler, ridge, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, v, filler, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withFiller(String v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, v, ridge, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, v, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withRidge(double v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, v, level, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, v, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withLevel(double v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, v, target, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, v, target, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withTarget(Target v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, v, sampling, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, v, sampling, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withSampling(Sampling v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, v, splitHalf, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, v, splitHalf, maxUnits, chooseBandwidth, pairing);
     }
 
     public ExplainSettings withSplitHalf(boolean v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, v, maxUnits);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, v, maxUnits, chooseBandwidth, pairing);
+    }
+
+    public ExplainSettings withChooseBandwidth(boolean v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits, v, pairing);
+    }
+
+    public ExplainSettings withPairing(Pairing v) {
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, maxUnits, chooseBandwidth, v);
     }
 
     public ExplainSettings withMaxUnits(int v) {
-        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, v);
+        return new ExplainSettings(words, probes, probeCap, unit, select, bandwidth, weighting, analyzer, seed, filler, ridge, level, target, sampling, splitHalf, v, chooseBandwidth, pairing);
     }
 }

@@ -82,7 +82,7 @@ public final class Explainer {
             }
             int first = settings.adaptive() ? Math.min(FIRST_ROUND, settings.probeCap()) : settings.probes();
             List<BitSet> round = new ArrayList<>(fixed);
-            round.addAll(ProbeSampler.draw(d, Math.max(0, first - fixed.size()), counts, sampling));
+            round.addAll(ProbeSampler.drawPaired(d, Math.max(0, first - fixed.size()), counts, settings.pairing(), sampling));
             probes.add(round);
         }
         int labelColumn = labelColumn(doc, probes, labelOrNull);
@@ -94,6 +94,7 @@ public final class Explainer {
         double resolution = target == Target.LOG_ODDS ? LOG_ODDS_RESOLUTION : PROBABILITY_RESOLUTION;
 
         double stability = Double.NaN;
+        double bandwidth = settings.bandwidth();
         int toGo = -1;
         Surrogate surrogate;
         if (d == 0) {
@@ -105,16 +106,17 @@ public final class Explainer {
             stability = settings.splitHalf() ? 1.0 : Double.NaN;
             surrogate = fitter.fit(d, probes.rows(), TargetValues.column(probes, labelColumn, target), true, draws);
         } else {
-            SurrogateFit.Design design = fitter.design(d, probes.rows(),
-                    TargetValues.column(probes, labelColumn, target), false, draws);
+            BandwidthChoice.Choice choice = design(d, probes, labelColumn, target, draws, k);
+            SurrogateFit.Design design = choice.design();
             int[] next = selectBeyond(design, k);
             Separation.Verdict verdict = verdict(design, next, k, resolution);
             while (settings.adaptive() && !verdict.settled() && probes.size() < settings.probeCap()) {
                 int n = probes.size();
                 double wanted = Double.isFinite(verdict.probesNeeded()) ? 1.1 * verdict.probesNeeded() : 2.0 * n;
                 int grown = (int) Math.min(settings.probeCap(), Math.max(n + FIRST_ROUND, Math.min(4.0 * n, wanted)));
-                probes.add(ProbeSampler.draw(d, grown - n, counts, sampling));
-                design = fitter.design(d, probes.rows(), TargetValues.column(probes, labelColumn, target), false, draws);
+                probes.add(ProbeSampler.drawPaired(d, grown - n, counts, settings.pairing(), sampling));
+                choice = design(d, probes, labelColumn, target, draws, k);
+                design = choice.design();
                 next = selectBeyond(design, k);
                 verdict = verdict(design, next, k, resolution);
             }
@@ -131,6 +133,7 @@ public final class Explainer {
             int[] reported = settings.select() == Selection.FORWARD
                     ? java.util.Arrays.copyOf(next, Math.min(k, next.length)) : fitter.select(design, k);
             surrogate = fitter.fitUnits(design, reported);
+            bandwidth = choice.bandwidth();
             if (settings.splitHalf()) {
                 stability = stability(d, probes, TargetValues.column(probes, labelColumn, target), fixed.size());
             }
@@ -163,7 +166,7 @@ public final class Explainer {
         }
         String selection = settings.allUnits() ? "all" : settings.select().key();
         Explanation.Method method = new Explanation.Method(settings.unit().key(), settings.weighting().key(),
-                selection, settings.bandwidth(), settings.ridge(), settings.allUnits() ? d : settings.words(),
+                selection, bandwidth, settings.ridge(), settings.allUnits() ? d : settings.words(),
                 settings.seed(), settings.analyzer(), settings.filler(), settings.level(), d, probes.calls(), exact,
                 stability, exact || d == 0 ? "exact" : "sandwich", target.key(), source, targetValue, saturated, toGo,
                 settings.sampling().key(), notes);
@@ -176,6 +179,16 @@ public final class Explainer {
     /** Effects below these are negligible for the stopping rule: half a percentage point, 0.05 in log-odds. */
     static final double PROBABILITY_RESOLUTION = 0.005;
     static final double LOG_ODDS_RESOLUTION = 0.05;
+
+    /** The sampled probes as the fit sees them, reweighted to a bandwidth chosen from them when asked. */
+    private BandwidthChoice.Choice design(int d, ProbeSet probes, int labelColumn, Target target, int draws, int k) {
+        double[] y = TargetValues.column(probes, labelColumn, target);
+        SurrogateFit.Design design = fitter.design(d, probes.rows(), y, false, draws);
+        if (!settings.chooseBandwidth() || settings.weighting() != Weighting.COSINE) {
+            return new BandwidthChoice.Choice(settings.bandwidth(), design, new double[0]);
+        }
+        return BandwidthChoice.choose(fitter, design, probes.rows(), y, draws, settings.bandwidth(), k);
+    }
 
     /** The K units the selection reports and the one it would add next (every unit when K ≥ d). */
     private int[] selectBeyond(SurrogateFit.Design design, int k) {

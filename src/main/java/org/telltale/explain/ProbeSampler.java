@@ -80,6 +80,61 @@ public final class ProbeSampler {
         return out;
     }
 
+    /**
+     * {@code count} probes in antithetic pairs (an odd count ends with a lone draw): the first of
+     * a pair is drawn as by {@link #draw(int, int, double[], ProbeRandom)}, the second is its
+     * complement ({@link Pairing#COMPLEMENT}) or removes as many units, taken first from those the
+     * first keeps ({@link Pairing#DISJOINT}: a uniform subset of them when the first removes at
+     * most half, else all of them and a uniform subset of the rest). Under DISJOINT the second
+     * probe, alone, has the distribution of the first, because a uniform k-subset's complement is
+     * a uniform (d − k)-subset; under COMPLEMENT only when the removed-count distribution is
+     * symmetric (the Shapley kernel's).
+     */
+    public static List<BitSet> drawPaired(int d, int count, double[] cumulative, Pairing pairing, ProbeRandom random) {
+        if (pairing == Pairing.NONE) {
+            return draw(d, count, cumulative, random);
+        }
+        List<BitSet> out = new ArrayList<>(count);
+        while (out.size() < count) {
+            BitSet first = cumulative == null ? draw(d, random) : draw(d, cumulative, random);
+            out.add(first);
+            if (out.size() < count) {
+                out.add(pairing == Pairing.COMPLEMENT ? complement(first, d) : disjoint(first, d, random));
+            }
+        }
+        return out;
+    }
+
+    private static BitSet complement(BitSet removed, int d) {
+        BitSet out = new BitSet(d);
+        out.set(0, d);
+        out.andNot(removed);
+        return out;
+    }
+
+    /** As many units as {@code removed}, as few of them shared as possible, uniform otherwise. */
+    private static BitSet disjoint(BitSet removed, int d, ProbeRandom random) {
+        int k = removed.cardinality();
+        BitSet kept = complement(removed, d);
+        int[] keptUnits = kept.stream().toArray();
+        if (k <= keptUnits.length) {
+            return pick(keptUnits, k, random);
+        }
+        BitSet out = pick(removed.stream().toArray(), k - keptUnits.length, random);
+        out.or(kept);
+        return out;
+    }
+
+    /** A uniform subset of {@code size} of the given units (Floyd's algorithm over their positions). */
+    private static BitSet pick(int[] units, int size, ProbeRandom random) {
+        BitSet positions = subset(units.length, size, random);
+        BitSet out = new BitSet();
+        for (int i = positions.nextSetBit(0); i >= 0; i = positions.nextSetBit(i + 1)) {
+            out.set(units[i]);
+        }
+        return out;
+    }
+
     /** A subset of {@code size} of d units, uniform among all such subsets (Floyd's algorithm). */
     private static BitSet subset(int d, int size, ProbeRandom random) {
         BitSet removed = new BitSet(d);

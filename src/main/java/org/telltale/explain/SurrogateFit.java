@@ -73,6 +73,11 @@ final class SurrogateFit {
         int rows() {
             return y.length;
         }
+
+        /** The same probes under other weights (a bandwidth chosen after sampling, {@link BandwidthChoice}). */
+        Design reweighted(double[] weights) {
+            return new Design(d, x, y, weights, full, empty, exact, shapley);
+        }
     }
 
     /**

@@ -44,8 +44,20 @@ public final class FaithfulnessBench {
             HardBench.run(documents, seed, args.length > 3 ? args[3] : HardBench.DEFAULT_VARIANTS);
             return;
         }
+        if (mode.equals("long")) {
+            StabilityBench.seeds(documents, seed, args.length > 3 ? args[3] : "defaults");
+            return;
+        }
+        if (mode.equals("nb")) {
+            StabilityBench.naiveBayes(args.length > 3 ? args[3] : "defaults");
+            return;
+        }
+        if (mode.equals("auto")) {
+            StabilityBench.budget(documents, seed, args.length > 3 ? args[3] : "defaults");
+            return;
+        }
         if (!mode.equals("easy")) {
-            throw new IllegalArgumentException("mode must be easy or hard: " + mode);
+            throw new IllegalArgumentException("mode must be easy, hard, long, auto or nb: " + mode);
         }
         Random random = new Random(seed);
         List<String> background = words(random, 1000, new HashSet<>());

@@ -35,13 +35,19 @@ import org.telltale.text.Document;
  */
 final class HardBench {
     static final String DEFAULT_VARIANTS = "sampling=uniform;sampling=kernel";
-    static final int[] BUDGETS = {500, 1000, 2000};
+    /** The budgets measured; {@code -Dtelltale.bench.budgets=500,20000} measures others (e.g. a converged ceiling). */
+    static final int[] BUDGETS = java.util.Arrays.stream(System.getProperty("telltale.bench.budgets", "500,1000,2000")
+            .split(",")).mapToInt(v -> Integer.parseInt(v.strip())).toArray();
     static final int K = 10;
 
     private HardBench() {
     }
 
-    static void run(int documents, long seed, String variants) throws Exception {
+    /** The generated documents and the two planted models of one seed. */
+    record Corpus(List<Document> docs, FaithfulnessBench.PresenceTree tree, FaithfulnessBench.SparseLogistic logistic) {
+    }
+
+    static Corpus corpus(int documents, long seed) {
         Random random = new Random(seed);
         List<String> background = FaithfulnessBench.words(random, 3000, new HashSet<>());
         List<String> signal = FaithfulnessBench.words(random, 60, new HashSet<>(background));
@@ -57,6 +63,14 @@ final class HardBench {
         }
         FaithfulnessBench.PresenceTree tree = new FaithfulnessBench.PresenceTree(signal, 7, random);
         FaithfulnessBench.SparseLogistic logistic = new FaithfulnessBench.SparseLogistic(signal, random);
+        return new Corpus(docs, tree, logistic);
+    }
+
+    static void run(int documents, long seed, String variants) throws Exception {
+        Corpus corpus = corpus(documents, seed);
+        List<Document> docs = corpus.docs();
+        FaithfulnessBench.PresenceTree tree = corpus.tree();
+        FaithfulnessBench.SparseLogistic logistic = corpus.logistic();
         double gold = docs.stream().mapToInt(d -> tree.gold(d.text()).size()).average().orElse(0);
         long withGold = docs.stream().filter(d -> !tree.gold(d.text()).isEmpty()).count();
         System.out.printf(Locale.ROOT, "hard: documents %d, seed %d, K = %d, mean distinct words %.1f,"
@@ -75,7 +89,7 @@ final class HardBench {
                 line.append(String.format(Locale.ROOT, "  logistic@%d %.3f", budget,
                         recall(logistic, docs, logistic::gold, settings.withProbes(budget))));
             }
-            if (LexiconCheck.available()) {
+            if (LexiconCheck.available() && !Boolean.getBoolean("telltale.bench.skipLexicon")) {
                 for (int budget : new int[] {1000, 2000}) {
                     LexiconCheck.Result r = LexiconCheck.measure(settings.withProbes(budget));
                     line.append(String.format(Locale.ROOT, "  afinn@%d precision %.3f rho %.3f", budget,
@@ -102,6 +116,8 @@ final class HardBench {
                 case "weighting" -> s.withWeighting(Weighting.fromKey(value));
                 case "select" -> s.withSelect(Selection.fromKey(value));
                 case "ridge" -> s.withRidge(Double.parseDouble(value));
+                case "bandwidth-choice" -> s.withChooseBandwidth(Boolean.parseBoolean(value));
+                case "pairing" -> s.withPairing(org.telltale.explain.Pairing.fromKey(value));
                 default -> throw new IllegalArgumentException("unknown variant setting: " + pair);
             };
         }

