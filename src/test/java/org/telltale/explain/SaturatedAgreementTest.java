@@ -33,8 +33,10 @@ import org.telltale.text.Document;
  * target for a model that answers them) the top-10 terms of two seeds must agree, same term and
  * same sign (common practice for the stability of explanations, e.g. Slack et al. 2021).
  *
- * <p>The bar here is 0.8 on average over six mails: measured 0.85 and 0.90 for the two seed pairs
- * below (docs/performance.md). The project's goal is 0.9; what keeps it from being met is not the
+ * <p>The bar here is 0.84 on average over six mails: measured 0.85 and 0.90 for the two seed pairs
+ * below at the defaults, the bandwidth chosen from the probes included (docs/performance.md; the
+ * bar sits a hundredth below the lower figure, which is 51 of 60 places). The project's goal is
+ * 0.9; what keeps it from being met is not the
  * saturation (the log-odds of naive Bayes are additive in word counts, so the surrogate family
  * holds the model) but near-ties at the tenth place among the 74–333 units of a mail, which
  * another draw orders differently.
@@ -98,7 +100,7 @@ class SaturatedAgreementTest {
         System.out.printf(Locale.ROOT, "saturated naive Bayes, seeds %d/%d: mean top-10 agreement %.3f;%s%n",
                 seedA, seedB, mean, each);
         assertTrue(saturated * 2 >= explained.size(), "the model should be saturated on most mails:" + each);
-        assertTrue(mean >= 0.8, "top-10 agreement " + mean + ":" + each);
+        assertTrue(mean >= 0.84, "top-10 agreement " + mean + ":" + each);
     }
 
     /** The share of the top k (by |weight|) that both report with the same sign. */
