@@ -1,9 +1,11 @@
 # slow_model.py - a test model service for bench/explain-bench.sh (Python 3, stdlib only).
 # Speaks Telltale's native protocol (docs/protocol.md): over HTTP on 127.0.0.1:PORT with
 # "http PORT SLEEP_MS", or as JSON lines on stdin/stdout with "lines". Each batch sleeps
-# SLEEP_MS, so its cost is known; scores come from a few invented keywords.
+# SLEEP_MS, so its cost is known; scores come from a few invented keywords. Over HTTP,
+# GET /stats answers {"batches": N}, the batches scored so far.
 import json
 import sys
+import threading
 import time
 from http.server import BaseHTTPRequestHandler, ThreadingHTTPServer
 
@@ -27,11 +29,28 @@ def answer(texts, sleep_ms):
 
 class Handler(BaseHTTPRequestHandler):
     protocol_version = "HTTP/1.1"
+    # Headers and body leave in one write with Nagle off, so no answer waits ~40 ms for the
+    # client's delayed ACK: a batch costs SLEEP_MS and the scoring, nothing else.
+    disable_nagle_algorithm = True
+    wbufsize = 1 << 16
     sleep_ms = 0.0
+
+    batches = 0
+    lock = threading.Lock()
+
+    def do_GET(self):
+        with Handler.lock:
+            batches = Handler.batches
+        self.send_body(json.dumps({"batches": batches}).encode("utf-8"))
 
     def do_POST(self):
         texts = json.loads(self.rfile.read(int(self.headers["Content-Length"])))["texts"]
         body = answer(texts, self.sleep_ms).encode("utf-8")
+        with Handler.lock:
+            Handler.batches += 1
+        self.send_body(body)
+
+    def send_body(self, body):
         self.send_response(200)
         self.send_header("Content-Type", "application/json")
         self.send_header("Content-Length", str(len(body)))
