@@ -1,6 +1,8 @@
 package org.telltale.audit;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
+import org.telltale.UnknownKeyException;
 
 /**
  * Where a term's occurrences sit in the text. Every kind but {@link #CONTENT} marks a place where
@@ -24,13 +26,8 @@ public enum ArtefactKind {
         return name().toLowerCase(Locale.ROOT);
     }
 
+    /** @throws UnknownKeyException for a name other than the five kinds' keys */
     public static ArtefactKind fromKey(String key) {
-        for (ArtefactKind kind : values()) {
-            if (kind.key().equals(key)) {
-                return kind;
-            }
-        }
-        throw new IllegalArgumentException(
-                "unknown kind '" + key + "' (expected header, address, identifier, boilerplate or content)");
+        return EnumKeys.parse("kind", key, values(), ArtefactKind::key);
     }
 }

@@ -1,6 +1,8 @@
 package org.telltale.audit;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
+import org.telltale.UnknownKeyException;
 
 /**
  * How urgently a finding needs a reviewer, from {@link #HIGH} down to {@link #LOW}; the rules are
@@ -37,12 +39,8 @@ public enum Severity {
         throw new IllegalArgumentException("failOn must be high, medium, low or never: " + failOn);
     }
 
+    /** @throws UnknownKeyException for a name other than {@code high}, {@code medium} or {@code low} */
     public static Severity fromKey(String key) {
-        for (Severity s : values()) {
-            if (s.key().equals(key)) {
-                return s;
-            }
-        }
-        throw new IllegalArgumentException("unknown severity '" + key + "' (expected high, medium or low)");
+        return EnumKeys.parse("severity", key, values(), Severity::key);
     }
 }

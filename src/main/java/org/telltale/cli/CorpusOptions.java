@@ -1,6 +1,8 @@
 package org.telltale.cli;
 
 import java.nio.file.Path;
+import org.telltale.OptionWords;
+import org.telltale.UnknownKeyException;
 import org.telltale.UsageException;
 import org.telltale.text.Corpora;
 import org.telltale.text.CorpusFormat;
@@ -49,7 +51,16 @@ final class CorpusOptions {
 
     /** The reader settings these options describe. */
     CorpusSettings settings() {
-        return new CorpusSettings(format == null ? null : CorpusFormat.fromKey(format), idField, textField, labelField, skipBad);
+        return new CorpusSettings(format(format), idField, textField, labelField, skipBad);
+    }
+
+    /** The format {@code --format} names, {@code null} when not given; a usage error for an unknown name. */
+    static CorpusFormat format(String key) {
+        try {
+            return key == null ? null : CorpusFormat.fromKey(key);
+        } catch (UnknownKeyException e) {
+            throw OptionWords.value("--format", e);
+        }
     }
 
     /** Opens the corpus; a usage error when {@code --corpus} is missing. */

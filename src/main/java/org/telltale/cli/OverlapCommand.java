@@ -18,7 +18,6 @@ import org.telltale.report.html.HtmlReports;
 import org.telltale.report.html.OverlapReport;
 import org.telltale.report.json.OverlapJson;
 import org.telltale.report.terminal.OverlapSummaryText;
-import org.telltale.text.CorpusFormat;
 import org.telltale.text.CorpusSettings;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -141,7 +140,7 @@ final class OverlapCommand implements Callable<Integer> {
     }
 
     private CorpusSettings corpusSettings() {
-        return new CorpusSettings(format == null ? null : CorpusFormat.fromKey(format), idField, textField, labelField, skipBad);
+        return new CorpusSettings(CorpusOptions.format(format), idField, textField, labelField, skipBad);
     }
 
     private void progress(PrintWriter err, String line) {

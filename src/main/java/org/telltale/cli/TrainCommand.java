@@ -5,7 +5,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.telltale.OptionWords;
 import org.telltale.TelltaleException;
+import org.telltale.UnknownKeyException;
 import org.telltale.UsageException;
 import org.telltale.model.Algorithm;
 import org.telltale.model.BuiltinModel;
@@ -119,8 +121,8 @@ final class TrainCommand implements Callable<Integer> {
         Algorithm algo;
         try {
             algo = Algorithm.fromKey(algorithm.toLowerCase(Locale.ROOT));
-        } catch (TelltaleException e) {
-            throw new UsageException("--algorithm: " + e.getMessage());
+        } catch (UnknownKeyException e) {
+            throw OptionWords.value("--algorithm", e);
         }
         if (ngrams != 1 && ngrams != 2) {
             throw new UsageException("--ngrams must be 1 or 2: " + ngrams);

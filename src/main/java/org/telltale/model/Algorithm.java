@@ -1,7 +1,8 @@
 package org.telltale.model;
 
 import java.util.Locale;
-import org.telltale.TelltaleException;
+import org.telltale.EnumKeys;
+import org.telltale.UnknownKeyException;
 
 /** The built-in learning algorithms and their names on the command line and in model files. */
 public enum Algorithm {
@@ -14,13 +15,8 @@ public enum Algorithm {
         return name().toLowerCase(Locale.ROOT);
     }
 
-    /** @throws TelltaleException for a name other than {@code bayes} or {@code logistic} */
+    /** @throws UnknownKeyException for a name other than {@code bayes} or {@code logistic} */
     public static Algorithm fromKey(String key) {
-        for (Algorithm a : values()) {
-            if (a.key().equals(key)) {
-                return a;
-            }
-        }
-        throw new TelltaleException("unknown algorithm '" + key + "' (expected bayes or logistic)");
+        return EnumKeys.parse("algorithm", key, values(), Algorithm::key);
     }
 }

@@ -5,6 +5,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.telltale.TelltaleException;
+import org.telltale.UnknownKeyException;
 
 /** Checks the bound contents of a model file field by field and builds the model. */
 final class ModelFileReader {
@@ -74,7 +75,7 @@ final class ModelFileReader {
         require("algorithm", key);
         try {
             return Algorithm.fromKey(key);
-        } catch (TelltaleException e) {
+        } catch (UnknownKeyException e) {
             throw bad("has " + e.getMessage());
         }
     }

@@ -3,6 +3,8 @@ package org.telltale.text;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
+import org.telltale.EnumKeys;
+import org.telltale.UnknownKeyException;
 import org.telltale.UsageException;
 
 /** The corpus layouts Telltale reads. */
@@ -19,13 +21,10 @@ public enum CorpusFormat {
         return name().toLowerCase(Locale.ROOT);
     }
 
+    /** The format named {@code key} in any case; @throws UnknownKeyException for another name */
     public static CorpusFormat fromKey(String key) {
-        for (CorpusFormat format : values()) {
-            if (format.key().equals(key.toLowerCase(Locale.ROOT))) {
-                return format;
-            }
-        }
-        throw new UsageException("unknown corpus format '" + key + "' (expected jsonl, csv or folder)");
+        return EnumKeys.parse("corpus format", key == null ? null : key.toLowerCase(Locale.ROOT), values(),
+                CorpusFormat::key);
     }
 
     /**

@@ -1,6 +1,8 @@
 package org.telltale.text;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
+import org.telltale.UnknownKeyException;
 
 /** What one explanation feature stands for. */
 public enum UnitKind {
@@ -16,12 +18,8 @@ public enum UnitKind {
         return name().toLowerCase(Locale.ROOT);
     }
 
+    /** @throws UnknownKeyException for a name other than {@code word}, {@code occurrence} or {@code line} */
     public static UnitKind fromKey(String key) {
-        for (UnitKind kind : values()) {
-            if (kind.key().equals(key)) {
-                return kind;
-            }
-        }
-        throw new IllegalArgumentException("unknown unit '" + key + "' (expected word, occurrence or line)");
+        return EnumKeys.parse("unit", key, values(), UnitKind::key);
     }
 }

@@ -61,6 +61,12 @@ class CorpusAndAnalyzerOptionsTest {
     }
 
     @Test
+    void anUnknownFormatNamesTheOptionAndListsTheFormats() {
+        UsageException e = assertThrows(UsageException.class, () -> parse("--format", "xml").corpus.settings());
+        assertEquals("--format: unknown corpus format 'xml'; one of: jsonl, csv, folder", e.getMessage());
+    }
+
+    @Test
     void anUnknownFormatOrAnalyzerIsAUsageError() {
         assertThrows(UsageException.class, () -> parse("--format", "xml").corpus.settings());
         assertThrows(UsageException.class, () -> parse("--analyzer", "klingon").analyzer.analyzer());

@@ -85,6 +85,14 @@ class TrainAndScoreCommandTest {
     }
 
     @Test
+    void anUnknownAlgorithmIsAUsageErrorListingTheAlgorithms() throws IOException {
+        Path corpus = LibraryDeskCorpus.write(dir, 5, 1, true);
+        Run r = run("train", "--corpus", corpus.toString(), "--out", dir.resolve("m.json").toString(), "--algorithm", "tree");
+        assertEquals(ExitCodes.USAGE, r.code());
+        assertTrue(r.err().contains("--algorithm: unknown algorithm 'tree'; one of: bayes, logistic"), r.err());
+    }
+
+    @Test
     void trainNeedsAGoldLabelOnEveryDocument() throws IOException {
         Path corpus = LibraryDeskCorpus.write(dir, 5, 1, false);
         Run r = run("train", "--corpus", corpus.toString(), "--out", dir.resolve("m.json").toString());
