@@ -4,6 +4,7 @@ import java.lang.management.ManagementFactory;
 import java.lang.management.ThreadMXBean;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.BitSet;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -25,8 +26,9 @@ import org.telltale.text.UnitKind;
 /**
  * How the scans of document text grow with its length, and what long runs cost a whole audit,
  * for docs/performance.md. Not a test: runs only with {@code -Dtelltale.benchmark=true}. Figures
- * are CPU time (of the measuring thread for the scans, of the process for audits), the best of
- * several repetitions after warm-up.
+ * are CPU time: of the measuring thread for the scans, the median of seven repetitions after ten
+ * warm-up ones at 100 kB and three at 1 MB; of the process for audits, the best of three rounds
+ * after a warm-up one.
  */
 @EnabledIfSystemProperty(named = "telltale.benchmark", matches = "true")
 class ScanningBenchmark {
@@ -51,14 +53,23 @@ class ScanningBenchmark {
         return scans;
     }
 
-    private static double cpuSeconds(Consumer<String> scan, String text, int repeats) {
-        long best = Long.MAX_VALUE;
+    /**
+     * The median CPU time of {@code repeats} runs after {@code warmups} unmeasured ones, at the size
+     * being measured: the first runs at a new size pay for the heap growing to hold it (fresh pages
+     * faulted in by the kernel), not for the scan.
+     */
+    private static double cpuSeconds(Consumer<String> scan, String text, int warmups, int repeats) {
+        for (int r = 0; r < warmups; r++) {
+            scan.accept(text);
+        }
+        long[] times = new long[repeats];
         for (int r = 0; r < repeats; r++) {
             long t0 = THREADS.getCurrentThreadCpuTime();
             scan.accept(text);
-            best = Math.min(best, THREADS.getCurrentThreadCpuTime() - t0);
+            times[r] = THREADS.getCurrentThreadCpuTime() - t0;
         }
-        return best / 1e9;
+        Arrays.sort(times);
+        return times[repeats / 2] / 1e9;
     }
 
     @Test
@@ -70,9 +81,8 @@ class ScanningBenchmark {
             for (String unit : UNITS) {
                 String small = LongRuns.repeat(unit, 100_000);
                 String large = LongRuns.repeat(unit, 1_000_000);
-                cpuSeconds(scan.getValue(), small, 3); // warm-up
-                double a = cpuSeconds(scan.getValue(), small, 5);
-                double b = cpuSeconds(scan.getValue(), large, 3);
+                double a = cpuSeconds(scan.getValue(), small, 10, 7); // the JIT settles during these
+                double b = cpuSeconds(scan.getValue(), large, 3, 7);
                 worst = Math.max(worst, b / a);
                 System.out.println(String.format(Locale.ROOT, "| %s | `%s` | %.2f | %.2f | %.1f |", scan.getKey(), unit,
                         a * 1e3, b * 1e3, b / a));
