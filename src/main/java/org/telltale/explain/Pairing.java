@@ -1,6 +1,7 @@
 package org.telltale.explain;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
 
 /**
  * Whether drawn probes come in antithetic pairs (Hammersley &amp; Morton 1956, "A new Monte Carlo
@@ -27,11 +28,6 @@ public enum Pairing {
     }
 
     public static Pairing fromKey(String key) {
-        for (Pairing p : values()) {
-            if (p.key.equals(key.strip().toLowerCase(Locale.ROOT))) {
-                return p;
-            }
-        }
-        throw new IllegalArgumentException("pairing must be none, complement or disjoint: " + key);
+        return EnumKeys.parse("pairing", key == null ? null : key.strip().toLowerCase(Locale.ROOT), values(), Pairing::key);
     }
 }

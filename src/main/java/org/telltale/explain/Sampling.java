@@ -1,6 +1,7 @@
 package org.telltale.explain;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
 
 /**
  * How the number of removed units of a drawn probe is chosen. {@link #UNIFORM} draws it uniformly
@@ -24,11 +25,6 @@ public enum Sampling {
     }
 
     public static Sampling fromKey(String key) {
-        for (Sampling s : values()) {
-            if (s.key.equals(key.strip().toLowerCase(Locale.ROOT))) {
-                return s;
-            }
-        }
-        throw new IllegalArgumentException("sampling must be uniform or kernel: " + key);
+        return EnumKeys.parse("sampling", key == null ? null : key.strip().toLowerCase(Locale.ROOT), values(), Sampling::key);
     }
 }

@@ -1,6 +1,7 @@
 package org.telltale.explain;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
 
 /**
  * How the K reported units are chosen before the weighted refit. Reporting every unit, without a
@@ -23,11 +24,6 @@ public enum Selection {
     }
 
     public static Selection fromKey(String key) {
-        for (Selection s : values()) {
-            if (s.key.equals(key.strip().toLowerCase(Locale.ROOT))) {
-                return s;
-            }
-        }
-        throw new IllegalArgumentException("selection must be forward or lasso: " + key);
+        return EnumKeys.parse("selection", key == null ? null : key.strip().toLowerCase(Locale.ROOT), values(), Selection::key);
     }
 }

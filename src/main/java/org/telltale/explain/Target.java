@@ -1,6 +1,7 @@
 package org.telltale.explain;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
 
 /**
  * What the surrogate is fitted to: the explained label's probability, or its log-odds
@@ -23,11 +24,6 @@ public enum Target {
     }
 
     public static Target fromKey(String key) {
-        for (Target t : values()) {
-            if (t.key.equals(key.strip().toLowerCase(Locale.ROOT))) {
-                return t;
-            }
-        }
-        throw new IllegalArgumentException("target must be probability, log-odds or auto: " + key);
+        return EnumKeys.parse("target", key == null ? null : key.strip().toLowerCase(Locale.ROOT), values(), Target::key);
     }
 }

@@ -1,6 +1,7 @@
 package org.telltale.explain;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
 
 /** How probes are weighted in the surrogate fit. */
 public enum Weighting {
@@ -14,11 +15,6 @@ public enum Weighting {
     }
 
     public static Weighting fromKey(String key) {
-        for (Weighting w : values()) {
-            if (w.key().equals(key.toLowerCase(Locale.ROOT))) {
-                return w;
-            }
-        }
-        throw new IllegalArgumentException("unknown weighting '" + key + "' (expected cosine or shapley)");
+        return EnumKeys.parse("weighting", key == null ? null : key.strip().toLowerCase(Locale.ROOT), values(), Weighting::key);
     }
 }
