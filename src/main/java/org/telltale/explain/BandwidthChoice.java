@@ -1,5 +1,9 @@
 package org.telltale.explain;
 
+import java.util.ArrayList;
+import java.util.BitSet;
+import java.util.List;
+
 /**
  * Chooses the cosine kernel's bandwidth σ for one document from the probes already scored, with
  * no further model calls. The probes were drawn for the proposal bandwidth σ₀, so under another σ
@@ -39,47 +43,44 @@ final class BandwidthChoice {
      * @param y        the explained target of each probe
      * @param draws    the drawn probes the fit stands for
      */
-    static Choice choose(SurrogateFit fitter, SurrogateFit.Design base, java.util.List<java.util.BitSet> rows,
+    static Choice choose(SurrogateFit fitter, SurrogateFit.Design base, List<BitSet> rows,
             double[] y, int draws, double proposal, int k) {
-        double[] candidates = CANDIDATES;
-        double bestScore = Double.NEGATIVE_INFINITY;
-        SurrogateFit.Design best = base;
-        double bestBandwidth = proposal;
-        double[] scores = new double[candidates.length];
-        int[] removed = new int[base.rows()];
-        for (int i = 0; i < removed.length; i++) {
-            removed[i] = base.d - base.x.presentCount(i);
-        }
         SurrogateFit.Design[] halves = halves(fitter, base.d, rows, y, draws);
-        for (int c = 0; c < candidates.length; c++) {
-            double sigma = candidates[c];
-            SurrogateFit.Design design = sigma == proposal ? base : base.reweighted(reweight(base, removed, proposal, sigma));
-            scores[c] = twoFold(fitter, halves, proposal, sigma, k);
-            if (scores[c] > bestScore) {
-                bestScore = scores[c];
-                best = design;
-                bestBandwidth = sigma;
-            }
-        }
+        double[] scores = new double[CANDIDATES.length];
         double proposalScore = Double.NEGATIVE_INFINITY;
-        for (int c = 0; c < candidates.length; c++) {
-            if (candidates[c] == proposal) {
+        int best = -1;
+        for (int c = 0; c < CANDIDATES.length; c++) {
+            scores[c] = twoFold(fitter, halves, proposal, CANDIDATES[c], k);
+            if (CANDIDATES[c] == proposal) {
                 proposalScore = scores[c];
             }
+            if (best < 0 || scores[c] > scores[best]) {
+                best = c;
+            }
         }
-        if (bestBandwidth != proposal && !(bestScore > proposalScore + MARGIN)) {
+        double sigma = CANDIDATES[best];
+        if (sigma == proposal || !(scores[best] > proposalScore + MARGIN)) {
             return new Choice(proposal, base, scores);
         }
-        return new Choice(bestBandwidth, best, scores);
+        // Only the winner's full design is reweighted; the candidates were scored on the halves.
+        return new Choice(sigma, base.reweighted(reweight(base, removedCounts(base), proposal, sigma)), scores);
+    }
+
+    private static int[] removedCounts(SurrogateFit.Design design) {
+        int[] removed = new int[design.rows()];
+        for (int i = 0; i < removed.length; i++) {
+            removed[i] = design.d - design.x.presentCount(i);
+        }
+        return removed;
     }
 
     /** The probes dealt alternately into two halves, probe 0 in both. */
-    private static SurrogateFit.Design[] halves(SurrogateFit fitter, int d, java.util.List<java.util.BitSet> rows,
+    private static SurrogateFit.Design[] halves(SurrogateFit fitter, int d, List<BitSet> rows,
             double[] y, int draws) {
         SurrogateFit.Design[] out = new SurrogateFit.Design[2];
         for (int h = 0; h < 2; h++) {
-            java.util.List<java.util.BitSet> part = new java.util.ArrayList<>();
-            java.util.List<Double> py = new java.util.ArrayList<>();
+            List<BitSet> part = new ArrayList<>();
+            List<Double> py = new ArrayList<>();
             for (int i = 0; i < rows.size(); i++) {
                 if (i == 0 || i % 2 == h) {
                     part.add(rows.get(i));
@@ -98,11 +99,8 @@ final class BandwidthChoice {
         double sst = 0;
         SurrogateFit.Design[] weighted = new SurrogateFit.Design[2];
         for (int h = 0; h < 2; h++) {
-            int[] removed = new int[halves[h].rows()];
-            for (int i = 0; i < removed.length; i++) {
-                removed[i] = halves[h].d - halves[h].x.presentCount(i);
-            }
-            weighted[h] = sigma == proposal ? halves[h] : halves[h].reweighted(reweight(halves[h], removed, proposal, sigma));
+            weighted[h] = sigma == proposal ? halves[h]
+                    : halves[h].reweighted(reweight(halves[h], removedCounts(halves[h]), proposal, sigma));
         }
         for (int h = 0; h < 2; h++) {
             SurrogateFit.Design train = weighted[h];
