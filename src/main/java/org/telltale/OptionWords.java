@@ -19,8 +19,7 @@ public final class OptionWords {
             "sample", "--sample",
             "probes", "--probes",
             "words", "--words",
-            "picks", "--picks",
-            "failOn", "--fail-on");
+            "picks", "--picks");
 
     private OptionWords() {
     }

@@ -78,14 +78,9 @@ final class ArtefactAssembly {
             terms.add(new ArtefactTerm(c.term(), c.entry().importance(), c.z(), c.entry().meanWeight()));
         }
         ArtefactIdentity identity = ArtefactIdentity.of(group.kind(), group.label(), group.pattern());
-        return new Artefact(id(identity), group.kind(), severity, group.label(), group.pattern(), support,
+        return new Artefact(identity.id(), group.kind(), severity, group.label(), group.pattern(), support,
                 Math.sqrt(sumSquares), strongest.z(), strongest.pLabelGivenTerm(), confirmed, accepted, status, note, terms,
                 effect.result(), examples(group, target, explanations, documents));
-    }
-
-    /** The artefact's id: its kind and the first 12 hex digits of its identity's fingerprint. */
-    static String id(ArtefactIdentity identity) {
-        return identity.kind() + "-" + identity.fingerprint().substring(0, 12);
     }
 
     /**

@@ -43,6 +43,11 @@ public record ArtefactIdentity(String kind, String label, String pattern) {
         return folded.replaceAll("\\s+", " ").strip();
     }
 
+    /** The artefact's id in audit.json: its kind and the first 12 hex digits of the fingerprint ({@code header-3f9a…}). */
+    public String id() {
+        return kind + "-" + fingerprint().substring(0, 12);
+    }
+
     /** {@code kind}, {@code label} and {@code pattern} joined by line feeds: the text that is hashed. */
     public String canonical() {
         return kind + "\n" + label + "\n" + pattern;

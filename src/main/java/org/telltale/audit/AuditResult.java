@@ -148,8 +148,8 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
      * @param corpus            the corpus file's name
      * @param seed              the run seed every random stream derives from
      * @param settings          the settings that decided this result
-     * @param associationBasis  {@code gold} when association is measured against gold labels (all
-     *                          documents carry one), else {@code predicted}
+     * @param associationBasis  {@code GOLD} when association is measured against gold labels (all
+     *                          documents carry one), else {@code PREDICTED}
      * @param prior             each label's share of the corpus on that basis: the null hypothesis
      *                          of the z-test
      * @param predictedCounts   documents the model assigns to each label
@@ -170,7 +170,7 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
             String corpus,
             long seed,
             AuditSettings settings,
-            String associationBasis,
+            AssociationBasis associationBasis,
             Map<String, Double> prior,
             Map<String, Long> predictedCounts,
             double zThreshold,
@@ -180,6 +180,7 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
 
         public Summary {
             labels = List.copyOf(labels);
+            Objects.requireNonNull(associationBasis, "associationBasis");
             prior = ordered(prior);
             predictedCounts = ordered(predictedCounts);
         }
@@ -201,11 +202,9 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
      * rewritten without them and scored again.
      *
      * @param kind           the kind scrubbed, or {@link #ALL}
-     * @param mode           how the kind is cut: {@code lines} (header fields and repeated lines),
-     *                       {@code matches} (addresses and identifiers), {@code terms} (content),
-     *                       or {@code mixed} for all at once
+     * @param mode           how the kind is cut ({@link ScrubMode}), {@code MIXED} for several modes at once
      * @param artefacts      the ids of the artefacts removed
-     * @param scope          {@code explained} or {@code corpus} (with {@code --scrub-all})
+     * @param scope          the explained documents or the whole corpus (setting {@code scrubAll})
      * @param documents      documents rewritten (those the scrub changed)
      * @param flips          of those, documents whose predicted label changed
      * @param flipRate       {@code flips / documents}
@@ -215,9 +214,9 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
      */
     public record Scrub(
             String kind,
-            String mode,
+            ScrubMode mode,
             List<String> artefacts,
-            String scope,
+            ScrubScope scope,
             int documents,
             int flips,
             double flipRate,
@@ -227,6 +226,8 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
 
         public Scrub {
             Objects.requireNonNull(kind, "kind");
+            Objects.requireNonNull(mode, "mode");
+            Objects.requireNonNull(scope, "scope");
             artefacts = List.copyOf(artefacts);
         }
 

@@ -13,7 +13,7 @@ import org.telltale.explain.Target;
  * @param words    how many terms each explanation selects (K)
  * @param picks    how many documents the submodular pick chooses for the reviewer (B)
  * @param scrubAll whether the scrub test rewrites the whole corpus, not only the explained documents
- * @param failOn   {@code high}, {@code medium}, {@code low} or {@code never}: the gate for exit code 3
+ * @param failOn   the gate for exit code 3
  * @param alpha    the family-wise significance level before the Bonferroni correction
  * @param batch    how many documents one scoring call carries while the corpus is scored
  * @param analyzer the analyzer name that cut texts into terms
@@ -25,7 +25,7 @@ public record AuditSettings(
         int words,
         int picks,
         boolean scrubAll,
-        String failOn,
+        FailOn failOn,
         double alpha,
         int batch,
         String analyzer,

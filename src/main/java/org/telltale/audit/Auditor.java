@@ -213,7 +213,7 @@ public final class Auditor {
 
         Summary summary = new Summary(scoring.documents(), explanations.size(), labels,
                 scoring.labelled() == 0 ? null : (double) scoring.correct() / scoring.labelled(), scoring.skipped(),
-                retries.getAsLong(), model, corpusName, seed, settings, gold ? "gold" : "predicted", prior,
+                retries.getAsLong(), model, corpusName, seed, settings, AssociationBasis.of(gold), prior,
                 scoring.predictedCounts(), rules.threshold(), rules.tested(), picks.coverage(),
                 (System.nanoTime() - started) / 1_000_000);
         return new Outcome(new AuditResult(summary, artefacts, scrub, picks.ids(), termStats), explanations);
@@ -432,18 +432,18 @@ public final class Auditor {
         }
         List<Scrub> out = new ArrayList<>();
         for (Map.Entry<ArtefactKind, List<String>> e : byKind.entrySet()) {
-            out.add(scrubRow(e.getKey().key(), Rewriter.artefactMode(e.getKey()), e.getValue(),
+            out.add(scrubRow(e.getKey().key(), ScrubMode.of(e.getKey()), e.getValue(),
                     effects.of(jobs.kinds().get(e.getKey()))));
         }
         if (!open.isEmpty()) {
-            out.add(scrubRow(AuditResult.ALL, byKind.size() == 1 ? out.get(0).mode() : "mixed", open,
+            out.add(scrubRow(AuditResult.ALL, byKind.size() == 1 ? out.get(0).mode() : ScrubMode.MIXED, open,
                     effects.of(jobs.all())));
         }
         return out;
     }
 
-    private Scrub scrubRow(String kind, String mode, List<String> artefacts, ScrubTest.Effect effect) {
-        return new Scrub(kind, mode, artefacts, settings.scrubAll() ? "corpus" : "explained", effect.documents(),
+    private Scrub scrubRow(String kind, ScrubMode mode, List<String> artefacts, ScrubTest.Effect effect) {
+        return new Scrub(kind, mode, artefacts, ScrubScope.of(settings.scrubAll()), effect.documents(),
                 effect.flips(), effect.flipRate(), effect.meanDrop(), effect.accuracyBefore(), effect.accuracyAfter());
     }
 

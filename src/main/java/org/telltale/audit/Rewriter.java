@@ -18,15 +18,6 @@ import org.telltale.text.UnitKind;
  * <p>Immutable and thread-safe.
  */
 final class Rewriter {
-    /** How a kind is scrubbed: its terms alone, or the lines and blocks around them. */
-    enum Mode {
-        TERMS, LINES;
-
-        String key() {
-            return this == TERMS ? "terms" : "lines";
-        }
-    }
-
     private final Analyzer analyzer;
     private final Predicate<String> boilerplate;
 
@@ -37,11 +28,6 @@ final class Rewriter {
 
     Analyzer analyzer() {
         return analyzer;
-    }
-
-    /** Header blocks and repeated lines go whole; addresses, identifiers and content go term by term. */
-    static Mode modeOf(ArtefactKind kind) {
-        return kind == ArtefactKind.HEADER || kind == ArtefactKind.BOILERPLATE ? Mode.LINES : Mode.TERMS;
     }
 
     /** The spans where {@code terms} occur in {@code text}. */
@@ -63,15 +49,6 @@ final class Rewriter {
             java.util.Objects.requireNonNull(kind, "kind");
             terms = java.util.Collections.unmodifiableSet(new java.util.LinkedHashSet<>(terms));
         }
-    }
-
-    /** How an artefact of {@code kind} is removed: whole lines, whole matches, or its terms. */
-    static String artefactMode(ArtefactKind kind) {
-        return switch (kind) {
-            case HEADER, BOILERPLATE -> "lines";
-            case ADDRESS, IDENTIFIER -> "matches";
-            case CONTENT -> "terms";
-        };
     }
 
     /**
@@ -115,7 +92,7 @@ final class Rewriter {
             for (Places.Place place : places.places()) {
                 if (place.kind() == target.kind() && place.key().equals(target.key())
                         && hits.stream().anyMatch(place.span()::overlaps)) {
-                    cuts.add(Rewriter.modeOf(target.kind()) == Mode.LINES ? TextLines.withTerminator(text, place.span())
+                    cuts.add(ScrubMode.of(target.kind()) == ScrubMode.LINES ? TextLines.withTerminator(text, place.span())
                             : place.span());
                 }
             }

@@ -22,7 +22,7 @@ import org.telltale.TelltaleException;
  * the seed and every setting that changes a number in {@code audit.json}. The journal's start line
  * keeps it, and {@code --resume} compares it field by field with the run that wants to continue.
  * What only changes how the work is done (batch size, requests in flight, time-outs, retries,
- * headers, the {@code --fail-on} gate) never enters, so a user may change it between runs.
+ * headers, the {@code failOn} gate) never enters, so a user may change it between runs.
  *
  * <p>A plain value of ordered string fields, so that any front (one JVM, Spark) can build the same
  * fingerprint from the same facts with {@link #builder()}. Immutable.

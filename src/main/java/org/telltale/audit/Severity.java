@@ -23,22 +23,6 @@ public enum Severity {
         return ordinal() <= other.ordinal();
     }
 
-    /**
-     * The gate of {@code failOn}: the least severity that fails an audit, or {@code null} for
-     * {@code never}. Every front that runs an audit reads its gate here.
-     */
-    public static Severity gate(String failOn) {
-        if ("never".equals(failOn)) {
-            return null;
-        }
-        for (Severity s : values()) {
-            if (s.key().equals(failOn)) {
-                return s;
-            }
-        }
-        throw new IllegalArgumentException("failOn must be high, medium, low or never: " + failOn);
-    }
-
     /** @throws UnknownKeyException for a name other than {@code high}, {@code medium} or {@code low} */
     public static Severity fromKey(String key) {
         return EnumKeys.parse("severity", key, values(), Severity::key);

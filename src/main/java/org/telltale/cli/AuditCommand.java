@@ -12,6 +12,7 @@ import org.telltale.UsageException;
 import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditSettings;
 import org.telltale.audit.Baseline;
+import org.telltale.audit.FailOn;
 import org.telltale.audit.Auditor;
 import org.telltale.audit.Journal;
 import org.telltale.audit.OutputFolder;
@@ -79,11 +80,11 @@ final class AuditCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        Severity gate;
+        FailOn gate;
         try {
-            gate = Severity.gate(failOn);
+            gate = FailOn.fromKey(failOn);
         } catch (IllegalArgumentException e) {
-            throw OptionWords.usage(e);
+            throw OptionWords.value("--fail-on", e);
         }
         if (resume && force) {
             throw new UsageException("--resume and --force exclude each other");
@@ -93,7 +94,7 @@ final class AuditCommand implements Callable<Integer> {
         }
         AuditSettings settings;
         try {
-            settings = new AuditSettings(sample, probes, words, picks, scrubAll, failOn, AuditSettings.DEFAULT_ALPHA,
+            settings = new AuditSettings(sample, probes, words, picks, scrubAll, gate, AuditSettings.DEFAULT_ALPHA,
                     model.settings().batch(), analyzer.spec(), policy == null ? null : policy.getFileName().toString());
         } catch (IllegalArgumentException e) {
             throw OptionWords.usage(e);
@@ -139,10 +140,11 @@ final class AuditCommand implements Callable<Integer> {
             files.add(SarifOutput.write(result, sarif, true, corpus.path(), corpus::open, since).toString());
         }
         AuditPrinter.print(spec.commandLine().getOut(), result, files, concurrency, since);
-        if (gate == null) {
+        Severity least = gate.least();
+        if (least == null) {
             return ExitCodes.OK;
         }
-        boolean failing = since == null || failOnAll ? !result.open(gate).isEmpty() : !since.gate(gate).isEmpty();
+        boolean failing = since == null || failOnAll ? !result.open(least).isEmpty() : !since.gate(least).isEmpty();
         return failing ? ExitCodes.GATE : ExitCodes.OK;
     }
 

@@ -57,12 +57,12 @@ final class AuditPrinter {
             printBaseline(out, since);
         }
         if (!result.scrub().isEmpty()) {
-            out.printf(Locale.ROOT, "%nscrub test (%s documents):%n", result.scrub().get(0).scope());
+            out.printf(Locale.ROOT, "%nscrub test (%s documents):%n", result.scrub().get(0).scope().key());
             out.printf(Locale.ROOT, "  %-11s %-7s %9s %9s %10s %9s %9s%n", "removed", "mode", "documents", "flip rate",
                     "score drop", "acc. was", "acc. now");
             for (Scrub x : result.scrub()) {
                 out.printf(Locale.ROOT, "  %-11s %-7s %9d %9.3f %10.3f %9s %9s%n", x.all() ? "all at once" : x.kind(),
-                        x.mode(), x.documents(), x.flipRate(), x.scoreDrop(), share(x.accuracyBefore()),
+                        x.mode().key(), x.documents(), x.flipRate(), x.scoreDrop(), share(x.accuracyBefore()),
                         share(x.accuracyAfter()));
             }
         }

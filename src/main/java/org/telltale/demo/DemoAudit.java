@@ -5,6 +5,7 @@ import java.util.Locale;
 import java.util.stream.Collectors;
 import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditSettings;
+import org.telltale.audit.FailOn;
 import org.telltale.audit.Auditor;
 import org.telltale.audit.Journal;
 import org.telltale.audit.OutputFolder;
@@ -42,7 +43,7 @@ final class DemoAudit {
     /** Audits {@code classifier} on {@code corpus}; writes audit.json, explanations.jsonl and report.html into {@code dir}. */
     AuditResult run(TextClassifier classifier, Path corpus, Path dir) {
         AuditSettings audit = new AuditSettings(settings.sample(), settings.probes(), settings.words(), PICKS, true,
-                "never", AuditSettings.DEFAULT_ALPHA, BATCH, ANALYZER, null);
+                FailOn.NEVER, AuditSettings.DEFAULT_ALPHA, BATCH, ANALYZER, null);
         ExplainSettings explain = ExplainSettings.defaults().withWords(settings.words()).withProbes(settings.probes())
                 .withSeed(settings.seed()).withAnalyzer(ANALYZER).withTarget(Target.PROBABILITY);
         OutputFolder folder = OutputFolder.open(dir, true, false);

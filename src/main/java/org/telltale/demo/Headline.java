@@ -4,6 +4,7 @@ import java.util.Locale;
 import java.util.Optional;
 import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditResult.Scrub;
+import org.telltale.audit.ScrubScope;
 import org.telltale.audit.Severity;
 
 /**
@@ -73,6 +74,6 @@ public record Headline(Double accuracy, Scrub all, Double accuracyAfter, int art
     }
 
     private static boolean corpusWide(Scrub s) {
-        return "corpus".equals(s.scope());
+        return s.scope() == ScrubScope.CORPUS;
     }
 }

@@ -18,6 +18,7 @@ import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditSettings;
 import org.telltale.audit.Auditor;
 import org.telltale.audit.OutputFolder;
+import org.telltale.audit.FailOn;
 import org.telltale.audit.Policy;
 import org.telltale.audit.Severity;
 import org.telltale.explain.Explanation;
@@ -70,13 +71,13 @@ public final class SparkAudit {
         if (o.has("--resume")) {
             throw new UsageException(RESUME_REFUSED);
         }
-        String failOn = o.get("--fail-on", "high");
-        Severity gate;
+        FailOn failOn;
         try {
-            gate = Severity.gate(failOn);
+            failOn = FailOn.fromKey(o.get("--fail-on", "high"));
         } catch (IllegalArgumentException e) {
-            throw OptionWords.usage(e);
+            throw OptionWords.value("--fail-on", e);
         }
+        Severity gate = failOn.least();
         String corpusPath = o.required("--corpus");
         ModelParams model = ModelParams.of(o);
         String analyzerSpec = o.get("--analyzer", "standard");
@@ -151,7 +152,7 @@ public final class SparkAudit {
         AuditResult.Summary s = result.summary();
         out.printf(Locale.ROOT, "audited %d documents, explained %d; artefacts: %d, %d open at or above %s%n",
                 s.documents(), s.explained(), result.artefacts().size(),
-                gate == null ? 0 : result.open(gate).size(), failOn);
+                gate == null ? 0 : result.open(gate).size(), failOn.key());
         for (String file : files) {
             out.println("  " + file);
         }

@@ -1,20 +1,37 @@
 package org.telltale.spark;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
+import org.telltale.OptionWords;
+import org.telltale.UnknownKeyException;
 import org.telltale.UsageException;
 
 /** The corpus formats the Spark fronts read through Spark's own readers. */
 enum SparkFormat {
     JSONL, CSV, PARQUET;
 
+    /** The lower-case name used on the command line. */
+    String key() {
+        return name().toLowerCase(Locale.ROOT);
+    }
+
+    /** The format named {@code key} in any case; @throws UnknownKeyException for another name */
+    static SparkFormat fromKey(String key) {
+        return EnumKeys.parse("corpus format", key == null ? null : key.toLowerCase(Locale.ROOT), values(),
+                SparkFormat::key);
+    }
+
+    /**
+     * The format {@code --format} names ({@code key}), or when it is not given ({@code null}) the
+     * one {@code path}'s name tells; a usage error for an unknown name or a name that tells none.
+     */
     static SparkFormat of(String key, String path) {
         if (key != null) {
-            return switch (key.toLowerCase(Locale.ROOT)) {
-                case "jsonl" -> JSONL;
-                case "csv" -> CSV;
-                case "parquet" -> PARQUET;
-                default -> throw new UsageException("unknown corpus format '" + key + "' (expected jsonl, csv or parquet)");
-            };
+            try {
+                return fromKey(key);
+            } catch (UnknownKeyException e) {
+                throw OptionWords.value("--format", e);
+            }
         }
         String name = path.toLowerCase(Locale.ROOT);
         while (name.endsWith("/")) {

@@ -27,4 +27,11 @@ class ArtefactIdentityTest {
         assertNotEquals(plain.fingerprint(), ArtefactIdentity.of(ArtefactKind.BOILERPLATE, "billing", "Exported by Casefile Archive").fingerprint());
         assertEquals("id", ArtefactIdentity.normalise("ID"));
     }
+
+    @Test
+    void theIdIsTheKindAndTheFirstTwelveHexDigitsOfTheFingerprint() {
+        // docs/audit.md, "Artefacts": an id is the kind and the first 12 hex digits of the fingerprint.
+        ArtefactIdentity id = ArtefactIdentity.of(ArtefactKind.ADDRESS, "billing", "ledgerline.example");
+        assertEquals("address-" + id.fingerprint().substring(0, 12), id.id());
+    }
 }

@@ -28,7 +28,7 @@ final class AuditRuns {
     };
 
     static AuditSettings settings(int sample, int probes, int words) {
-        return new AuditSettings(sample, probes, words, 5, false, "high", AuditSettings.DEFAULT_ALPHA, 64,
+        return new AuditSettings(sample, probes, words, 5, false, FailOn.HIGH, AuditSettings.DEFAULT_ALPHA, 64,
                 "standard", null);
     }
 

@@ -13,7 +13,7 @@ class AuditSettingsTest {
                 setting.equals("probes") ? value : 500,
                 setting.equals("words") ? value : 10,
                 setting.equals("picks") ? value : 5,
-                false, "high", AuditSettings.DEFAULT_ALPHA,
+                false, FailOn.HIGH, AuditSettings.DEFAULT_ALPHA,
                 setting.equals("batch") ? value : 64,
                 "standard", null);
     }

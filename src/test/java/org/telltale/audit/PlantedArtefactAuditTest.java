@@ -41,7 +41,7 @@ class PlantedArtefactAuditTest {
 
         assertEquals(360, result.summary().documents());
         assertEquals(45, result.summary().explained());
-        assertEquals("gold", result.summary().associationBasis());
+        assertEquals(AssociationBasis.GOLD, result.summary().associationBasis());
         // The planted artefacts of UtilityQueues, each with the place it was planted in.
         assertEquals(ArtefactKind.HEADER, finding(result, "ivr7").orElseThrow(() -> new AssertionError(found)).kind(), found);
         assertEquals("outage", finding(result, "ivr7").get().label());
@@ -64,7 +64,7 @@ class PlantedArtefactAuditTest {
         }
         AuditResult.Scrub boilerplate = result.scrub().stream().filter(s -> s.kind().equals("boilerplate"))
                 .findFirst().orElseThrow();
-        assertEquals("lines", boilerplate.mode());
+        assertEquals(ScrubMode.LINES, boilerplate.mode());
         assertTrue(boilerplate.flipRate() > 0.1, boilerplate.toString());
         assertTrue(boilerplate.accuracyAfter() < boilerplate.accuracyBefore(), boilerplate.toString());
         assertTrue(finding(result, "blq").get().confirmed());
@@ -80,7 +80,7 @@ class PlantedArtefactAuditTest {
         Path corpus = UtilityQueues.write(unlabelled, dir.resolve("mailbox.jsonl"));
         AuditResult result = AuditRuns.run(model, corpus, AuditRuns.settings(45, 300, 8), SEED, Policy.empty(), dir)
                 .result();
-        assertEquals("predicted", result.summary().associationBasis());
+        assertEquals(AssociationBasis.PREDICTED, result.summary().associationBasis());
         assertEquals(null, result.summary().accuracy());
         // The prior is the model's own share of predictions per label.
         result.summary().predictedCounts().forEach((label, n) ->

@@ -9,12 +9,12 @@ import org.telltale.model.TrainingSet;
 import org.telltale.text.Document;
 
 /** Built-in models trained in the tests through the models' own Java API. */
-final class TrainedModels {
+public final class TrainedModels {
     private TrainedModels() {
     }
 
     /** Multinomial naive Bayes with Laplace smoothing over the standard analyzer's terms. */
-    static NaiveBayesModel naiveBayes(List<Document> docs) {
+    public static NaiveBayesModel naiveBayes(List<Document> docs) {
         TermCounter counter = new TermCounter("standard", 1);
         List<Map<String, Integer>> counts = docs.stream().map(d -> counter.count(d.text())).toList();
         TrainingSet data = TrainingSet.of(counts, docs.stream().map(Document::label).toList());

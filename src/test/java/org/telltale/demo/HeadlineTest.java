@@ -1,5 +1,9 @@
 package org.telltale.demo;
 
+import org.telltale.audit.AssociationBasis;
+import org.telltale.audit.FailOn;
+import org.telltale.audit.ScrubScope;
+import org.telltale.audit.ScrubMode;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 
@@ -57,15 +61,16 @@ class HeadlineTest {
     }
 
     static AuditResult audit(long documents, double accuracy, List<Scrub> scrubs, List<Artefact> artefacts) {
-        AuditSettings settings = new AuditSettings(60, 500, 10, 5, true, "never", 0.05, 64, "standard", null);
+        AuditSettings settings = new AuditSettings(60, 500, 10, 5, true, FailOn.NEVER, 0.05, 64, "standard", null);
         AuditResult.Summary summary = new AuditResult.Summary(documents, 60, List.of("billing", "outage"), accuracy, 0, 0,
-                "model", "holdout.jsonl", 1, settings, "gold", Map.of("billing", 0.5, "outage", 0.5),
+                "model", "holdout.jsonl", 1, settings, AssociationBasis.GOLD, Map.of("billing", 0.5, "outage", 0.5),
                 Map.of("billing", 250L, "outage", 250L), 4.2, 100, 0.8, 1000);
         return new AuditResult(summary, artefacts, scrubs, List.of(), List.of());
     }
 
     static Scrub scrub(String kind, String mode, String scope, int docs, double before, double after, int artefacts) {
-        return new Scrub(kind, mode, java.util.Collections.nCopies(artefacts, "header-0"), scope, docs, docs / 2, 0.5, 0.3,
+        return new Scrub(kind, ScrubMode.fromKey(mode), java.util.Collections.nCopies(artefacts, "header-0"),
+                ScrubScope.fromKey(scope), docs, docs / 2, 0.5, 0.3,
                 before, after);
     }
 

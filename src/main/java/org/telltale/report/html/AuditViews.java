@@ -89,7 +89,7 @@ public final class AuditViews {
                 .filter(x -> x.accuracyBefore() != null && x.accuracyAfter() != null)
                 .ifPresent(x -> tiles.add(new AuditView.Tile("without all artefacts",
                         Numbers.percent(x.accuracyBefore()) + " → " + Numbers.percent(x.accuracyAfter()),
-                        "accuracy on the " + x.documents() + " " + x.scope() + " documents they touch")));
+                        "accuracy on the " + x.documents() + " " + x.scope().key() + " documents they touch")));
         tiles.add(new AuditView.Tile("suppressed", Long.toString(suppressed), "accepted by the policy"));
         tiles.add(new AuditView.Tile("labels", Integer.toString(s.labels().size()),
                 VisibleText.inline(String.join(", ", s.labels()))));

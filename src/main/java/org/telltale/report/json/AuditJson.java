@@ -13,8 +13,11 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Function;
+import org.telltale.UnknownKeyException;
 import org.telltale.audit.ArtefactIdentity;
 import org.telltale.audit.ArtefactKind;
+import org.telltale.audit.AssociationBasis;
 import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditResult.Artefact;
 import org.telltale.audit.AuditResult.ArtefactTerm;
@@ -24,6 +27,9 @@ import org.telltale.audit.AuditResult.Scrub;
 import org.telltale.audit.AuditResult.Summary;
 import org.telltale.audit.AuditResult.TermStat;
 import org.telltale.audit.AuditSettings;
+import org.telltale.audit.FailOn;
+import org.telltale.audit.ScrubMode;
+import org.telltale.audit.ScrubScope;
 import org.telltale.audit.Severity;
 import org.telltale.json.JsonValue;
 import org.telltale.text.Span;
@@ -138,7 +144,7 @@ public final class AuditJson {
         o.put("corpus", s.corpus());
         o.put("seed", s.seed());
         o.set("settings", settingsTree(s.settings()));
-        o.put("association_basis", s.associationBasis());
+        o.put("association_basis", s.associationBasis().key());
         ObjectNode prior = o.putObject("prior");
         s.prior().forEach((k, v) -> putNumber(prior, k, v));
         ObjectNode counts = o.putObject("predicted_counts");
@@ -157,7 +163,7 @@ public final class AuditJson {
         o.put("words", s.words());
         o.put("picks", s.picks());
         o.put("scrub_all", s.scrubAll());
-        o.put("fail_on", s.failOn());
+        o.put("fail_on", s.failOn().key());
         putNumber(o, "alpha", s.alpha());
         o.put("batch", s.batch());
         o.put("analyzer", s.analyzer());
@@ -215,10 +221,10 @@ public final class AuditJson {
     private static ObjectNode scrubTree(Scrub s) {
         ObjectNode o = MAPPER.createObjectNode();
         o.put("kind", s.kind());
-        o.put("mode", s.mode());
+        o.put("mode", s.mode().key());
         ArrayNode ids = o.putArray("artefacts");
         s.artefacts().forEach(ids::add);
-        o.put("scope", s.scope());
+        o.put("scope", s.scope().key());
         o.put("documents", s.documents());
         o.put("flips", s.flips());
         putNumber(o, "flip_rate", s.flipRate());
@@ -273,7 +279,7 @@ public final class AuditJson {
                 o.string("corpus"),
                 o.integer("seed"),
                 settings(o.object("settings")),
-                o.string("association_basis"),
+                key(o, "association_basis", AssociationBasis::fromKey),
                 numbers(o.object("prior")),
                 integers(o.object("predicted_counts")),
                 number(o, "z_threshold"),
@@ -285,7 +291,7 @@ public final class AuditJson {
     private static AuditSettings settings(JsonValue o) {
         try {
             return new AuditSettings(o.int32("sample"), o.int32("probes"), o.int32("words"), o.int32("picks"),
-                    o.bool("scrub_all"), o.string("fail_on"), o.number("alpha"), o.int32("batch"), o.string("analyzer"),
+                    o.bool("scrub_all"), key(o, "fail_on", FailOn::fromKey), o.number("alpha"), o.int32("batch"), o.string("analyzer"),
                     o.optionalString("policy"));
         } catch (IllegalArgumentException e) {
             throw o.here(e.getMessage());
@@ -332,7 +338,8 @@ public final class AuditJson {
         if (!AuditResult.ALL.equals(kind)) {
             kind(o, "kind");
         }
-        return new Scrub(kind, o.string("mode"), o.strings("artefacts"), o.string("scope"), o.int32("documents"),
+        return new Scrub(kind, key(o, "mode", ScrubMode::fromKey), o.strings("artefacts"), key(o, "scope", ScrubScope::fromKey),
+                o.int32("documents"),
                 o.int32("flips"), number(o, "flip_rate"), number(o, "score_drop"), nullable(o, "accuracy_before"),
                 nullable(o, "accuracy_after"));
     }
@@ -344,18 +351,20 @@ public final class AuditJson {
     }
 
     static ArtefactKind kind(JsonValue o, String field) {
-        try {
-            return ArtefactKind.fromKey(o.string(field));
-        } catch (IllegalArgumentException e) {
-            throw o.at(field, e.getMessage());
-        }
+        return key(o, field, ArtefactKind::fromKey);
     }
 
     static Severity severity(JsonValue o) {
+        return key(o, "severity", Severity::fromKey);
+    }
+
+    /** The enum value whose key is the string {@code field}; an unknown key is an error naming the file and the field. */
+    static <E extends Enum<E>> E key(JsonValue o, String field, Function<String, E> fromKey) {
+        String key = o.string(field);
         try {
-            return Severity.fromKey(o.string("severity"));
-        } catch (IllegalArgumentException e) {
-            throw o.at("severity", e.getMessage());
+            return fromKey.apply(key);
+        } catch (UnknownKeyException e) {
+            throw o.at(field, e.getMessage());
         }
     }
 
@@ -396,7 +405,7 @@ public final class AuditJson {
                 String term = f.string("term");
                 ArtefactKind kind = kind(f, "kind");
                 String label = f.string("label");
-                String id = kind.key() + "-" + ArtefactIdentity.of(kind, label, term).fingerprint().substring(0, 12);
+                String id = ArtefactIdentity.of(kind, label, term).id();
                 double importance = number(f, "importance");
                 double z = number(f, "z");
                 double weight = number(f, "mean_weight");
@@ -415,7 +424,8 @@ public final class AuditJson {
                 List<String> ids = artefacts.stream().filter(a -> a.kind() == kind && !a.suppressed())
                         .map(Artefact::id).toList();
                 s.strings("terms");
-                scrub.add(new Scrub(kind.key(), s.string("mode"), ids, s.string("scope"), s.int32("documents"),
+                scrub.add(new Scrub(kind.key(), key(s, "mode", ScrubMode::fromKey), ids, key(s, "scope", ScrubScope::fromKey),
+                        s.int32("documents"),
                         s.int32("flips"), number(s, "flip_rate"), number(s, "score_drop"),
                         nullable(s, "accuracy_before"), nullable(s, "accuracy_after")));
             }

@@ -164,13 +164,13 @@ public final class AuditSarif {
         settings.put("words", a.words());
         settings.put("picks", a.picks());
         settings.put("scrubAll", a.scrubAll());
-        settings.put("failOn", a.failOn());
+        settings.put("failOn", a.failOn().key());
         settings.put("alpha", a.alpha());
         settings.put("batch", a.batch());
         settings.put("analyzer", a.analyzer());
         settings.put("policy", a.policy());
         out.put("settings", settings);
-        out.put("associationBasis", s.associationBasis());
+        out.put("associationBasis", s.associationBasis().key());
         out.put("zThreshold", s.zThreshold());
         out.put("termsTested", s.termsTested());
         out.put("caution", "Explanations are local approximations of the model, not causes; a clean audit does not "

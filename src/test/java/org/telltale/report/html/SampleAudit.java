@@ -1,5 +1,9 @@
 package org.telltale.report.html;
 
+import org.telltale.audit.AssociationBasis;
+import org.telltale.audit.FailOn;
+import org.telltale.audit.ScrubScope;
+import org.telltale.audit.ScrubMode;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -97,14 +101,14 @@ final class SampleAudit {
                 artefact("refund", List.of("refund"), ArtefactKind.CONTENT, Severity.LOW, "billing", 0.12, 9.6, false,
                         true, examples.get("refund")));
         List<AuditResult.Scrub> scrub = List.of(
-                new AuditResult.Scrub("header", "lines", List.of(artefacts.get(0).id()), "explained", documents / 3,
+                new AuditResult.Scrub("header", ScrubMode.LINES, List.of(artefacts.get(0).id()), ScrubScope.EXPLAINED, documents / 3,
                         documents / 8, 0.375, 0.212, 0.93, 0.71),
-                new AuditResult.Scrub("boilerplate", "lines", List.of(artefacts.get(1).id()), "explained", documents / 3,
+                new AuditResult.Scrub("boilerplate", ScrubMode.LINES, List.of(artefacts.get(1).id()), ScrubScope.EXPLAINED, documents / 3,
                         documents / 20, 0.15, 0.094, 0.91, 0.84),
-                new AuditResult.Scrub("address", "matches", List.of(artefacts.get(2).id()), "explained", documents / 4,
+                new AuditResult.Scrub("address", ScrubMode.MATCHES, List.of(artefacts.get(2).id()), ScrubScope.EXPLAINED, documents / 4,
                         0, 0.0, 0.004, 0.9, 0.9),
-                new AuditResult.Scrub(AuditResult.ALL, "mixed", artefacts.subList(0, 3).stream()
-                        .map(AuditResult.Artefact::id).toList(), "explained", documents / 2, documents / 6, 0.33, 0.18,
+                new AuditResult.Scrub(AuditResult.ALL, ScrubMode.MIXED, artefacts.subList(0, 3).stream()
+                        .map(AuditResult.Artefact::id).toList(), ScrubScope.EXPLAINED, documents / 2, documents / 6, 0.33, 0.18,
                         0.92, 0.66));
         List<AuditResult.TermStat> terms = new ArrayList<>();
         for (AuditResult.Artefact a : artefacts) {
@@ -128,9 +132,9 @@ final class SampleAudit {
         }
         AuditResult.Summary summary = new AuditResult.Summary(documents * 4L, documents, List.of(LABELS),
                 documents == 0 ? null : (double) correct / documents, 2, 0, "naive Bayes, harbourline-router.model",
-                "harbourline-tickets.jsonl", seed, new AuditSettings(documents, 1000, 8, 3, false, "high",
+                "harbourline-tickets.jsonl", seed, new AuditSettings(documents, 1000, 8, 3, false, FailOn.HIGH,
                         AuditSettings.DEFAULT_ALPHA, 64, "standard", null),
-                "gold", prior, counts, 4.42, 3120, 0.81, 91_000);
+                AssociationBasis.GOLD, prior, counts, 4.42, 3120, 0.81, 91_000);
         return new Audit(new AuditResult(summary, artefacts, scrub, picks, terms), explanations);
     }
 
@@ -150,8 +154,7 @@ final class SampleAudit {
                 .map(t -> new AuditResult.ArtefactTerm(t, importance, z, weight)).toList();
         AuditResult.Effect scrub = new AuditResult.Effect(examples.size(), confirmed ? examples.size() / 3 : 0,
                 confirmed ? 1.0 / 3 : 0, confirmed ? 0.2 : 0.01, 0.95, confirmed ? 0.6 : 0.95);
-        String id = kind.key() + "-" + org.telltale.audit.ArtefactIdentity.of(kind, label, pattern).fingerprint()
-                .substring(0, 12);
+        String id = org.telltale.audit.ArtefactIdentity.of(kind, label, pattern).id();
         return new AuditResult.Artefact(id, kind, severity, label, pattern, examples.size(), importance, z, 0.96,
                 confirmed, suppressed, suppressed ? "accepted" : null,
                 suppressed ? "refund requests are the task's own evidence" : null, terms, scrub, examples);

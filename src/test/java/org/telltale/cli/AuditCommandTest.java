@@ -1,8 +1,10 @@
-package org.telltale.audit;
+package org.telltale.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.PrintWriter;
+import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -10,7 +12,10 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.telltale.ExitCodes;
-import org.telltale.cli.Main;
+import org.telltale.audit.AuditResult;
+import org.telltale.audit.Severity;
+import org.telltale.audit.TrainedModels;
+import org.telltale.audit.UtilityQueues;
 import org.telltale.model.ModelFile;
 import org.telltale.report.json.AuditJson;
 import org.telltale.report.json.ExplanationsJson;
@@ -24,6 +29,16 @@ class AuditCommandTest {
                 "--quiet", "--seed", "3"));
         args.addAll(List.of(more));
         return args.toArray(String[]::new);
+    }
+
+    /** The exit code and the standard error of one run. */
+    private static String[] run(String... args) {
+        picocli.CommandLine cli = Main.commandLine();
+        StringWriter err = new StringWriter();
+        cli.setOut(new PrintWriter(new StringWriter()));
+        cli.setErr(new PrintWriter(err));
+        int code = cli.execute(args);
+        return new String[] {Integer.toString(code), err.toString()};
     }
 
     @Test
@@ -89,7 +104,11 @@ class AuditCommandTest {
         Path model = dir.resolve("router.model");
         ModelFile.save(TrainedModels.naiveBayes(UtilityQueues.generate(1, 20, true)), model);
         Path corpus = UtilityQueues.write(UtilityQueues.generate(2, 10, true), dir.resolve("mailbox.jsonl"));
-        assertEquals(ExitCodes.USAGE, Main.run(audit(model, corpus, dir.resolve("a"), "--fail-on", "sometimes")));
+        String[] gate = run(audit(model, corpus, dir.resolve("a"), "--fail-on", "sometimes"));
+        assertEquals(Integer.toString(ExitCodes.USAGE), gate[0]);
+        // The core's words (FailOn), the option named once at the edge (OptionWords.value).
+        assertEquals("telltale: --fail-on: unknown gate 'sometimes'; one of: high, medium, low, never",
+                gate[1].lines().findFirst().orElse(""));
         assertEquals(ExitCodes.USAGE, Main.run(audit(model, corpus, dir.resolve("b"), "--resume", "--force")));
         assertEquals(ExitCodes.USAGE, Main.run(audit(model, corpus, dir.resolve("c"), "--picks", "-1")));
         assertEquals(ExitCodes.ERROR, Main.run(audit(model, corpus, dir.resolve("d"), "--resume")),

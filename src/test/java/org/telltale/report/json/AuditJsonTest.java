@@ -1,4 +1,4 @@
-package org.telltale.audit;
+package org.telltale.report.json;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -13,6 +13,10 @@ import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.telltale.TelltaleException;
+import org.telltale.audit.ArtefactIdentity;
+import org.telltale.audit.ArtefactKind;
+import org.telltale.audit.AssociationBasis;
+import org.telltale.audit.AuditResult;
 import org.telltale.audit.AuditResult.Artefact;
 import org.telltale.audit.AuditResult.ArtefactTerm;
 import org.telltale.audit.AuditResult.Effect;
@@ -20,28 +24,32 @@ import org.telltale.audit.AuditResult.Example;
 import org.telltale.audit.AuditResult.Scrub;
 import org.telltale.audit.AuditResult.Summary;
 import org.telltale.audit.AuditResult.TermStat;
-import org.telltale.report.json.AuditJson;
+import org.telltale.audit.AuditSettings;
+import org.telltale.audit.FailOn;
+import org.telltale.audit.ScrubMode;
+import org.telltale.audit.ScrubScope;
+import org.telltale.audit.Severity;
 import org.telltale.text.Span;
 
 class AuditJsonTest {
 
     static AuditResult sample() {
         Summary summary = new Summary(400, 60, List.of("billing", "outage"), 0.925, 1, 3, "router.model",
-                "queue.jsonl", 7, new AuditSettings(60, 500, 8, 5, false, "high", 0.05, 64, "standard", null),
-                "gold", Map.of("billing", 0.5, "outage", 0.5), Map.of("billing", 198L, "outage", 202L),
+                "queue.jsonl", 7, new AuditSettings(60, 500, 8, 5, false, FailOn.HIGH, 0.05, 64, "standard", null),
+                AssociationBasis.GOLD, Map.of("billing", 0.5, "outage", 0.5), Map.of("billing", 198L, "outage", 202L),
                 4.1, 240, 0.81, 1234);
         ArtefactIdentity route = ArtefactIdentity.of(ArtefactKind.HEADER, "outage", "X-Relay: gx7relay");
-        Artefact header = new Artefact(ArtefactAssembly.id(route), ArtefactKind.HEADER, Severity.HIGH, "outage",
+        Artefact header = new Artefact(route.id(), ArtefactKind.HEADER, Severity.HIGH, "outage",
                 "X-Relay: gx7relay", 43, 2.5, 5.9, 0.953, true, false, null, null,
                 List.of(new ArtefactTerm("gx7relay", 2.5, 5.9, 0.31)), new Effect(28, 12, 12 / 28.0, 0.4, 0.96, 0.6),
                 List.of(new Example("t-17", List.of(new Span(10, 18)))));
         ArtefactIdentity footer = ArtefactIdentity.of(ArtefactKind.BOILERPLATE, "billing", "Read by the meter desk");
-        Artefact suppressed = new Artefact(ArtefactAssembly.id(footer), ArtefactKind.BOILERPLATE, Severity.LOW, "billing",
+        Artefact suppressed = new Artefact(footer.id(), ArtefactKind.BOILERPLATE, Severity.LOW, "billing",
                 "Read by the meter desk", 80, 1.1, 4.2, 0.7, false, true, "accepted", "meter talk is expected",
                 List.of(new ArtefactTerm("meter", 1.0, 4.2, 0.1), new ArtefactTerm("desk", 0.45, Double.NaN, 0.02)),
                 Effect.NONE, List.of());
-        Scrub kind = new Scrub("header", "lines", List.of(header.id()), "explained", 60, 21, 0.35, 0.28, 0.95, null);
-        Scrub all = new Scrub(AuditResult.ALL, "lines", List.of(header.id()), "explained", 60, 21, 0.35, 0.28, 0.95, null);
+        Scrub kind = new Scrub("header", ScrubMode.LINES, List.of(header.id()), ScrubScope.EXPLAINED, 60, 21, 0.35, 0.28, 0.95, null);
+        Scrub all = new Scrub(AuditResult.ALL, ScrubMode.LINES, List.of(header.id()), ScrubScope.EXPLAINED, 60, 21, 0.35, 0.28, 0.95, null);
         List<TermStat> terms = List.of(new TermStat("gx7relay", "outage", ArtefactKind.HEADER, 43, 2.5, 5.9, 0.93, 0.31, 28,
                 header.id()), new TermStat("power", "outage", ArtefactKind.CONTENT, 120, 0.9, 2.2, 0.4, 0.05, 11, null));
         return new AuditResult(summary, List.of(header, suppressed), List.of(kind, all), List.of("t-17", "t-3"), terms);
@@ -113,6 +121,37 @@ class AuditJsonTest {
     }
 
     @Test
+    void aValueOutsideAClosedSetIsNamedWithItsFieldAndTheAcceptedValues() {
+        // The closed sets of the contract and the error as docs/audit.md ("Outputs") gives them.
+        String json = AuditJson.toJson(sample());
+        TelltaleException scope = assertThrows(TelltaleException.class,
+                () -> AuditJson.fromJson(json.replace("\"scope\" : \"explained\"", "\"scope\" : \"everything\""), "a.json"));
+        assertEquals("a.json: scrub[0].scope: unknown scrub scope 'everything'; one of: explained, corpus", scope.getMessage());
+        TelltaleException mode = assertThrows(TelltaleException.class,
+                () -> AuditJson.fromJson(json.replace("\"mode\" : \"lines\"", "\"mode\" : \"words\""), "a.json"));
+        assertEquals("a.json: scrub[0].mode: unknown scrub mode 'words'; one of: lines, matches, terms, mixed",
+                mode.getMessage());
+        TelltaleException gate = assertThrows(TelltaleException.class,
+                () -> AuditJson.fromJson(json.replace("\"fail_on\" : \"high\"", "\"fail_on\" : \"sometimes\""), "a.json"));
+        assertEquals("a.json: summary.settings.fail_on: unknown gate 'sometimes'; one of: high, medium, low, never",
+                gate.getMessage());
+        TelltaleException basis = assertThrows(TelltaleException.class, () -> AuditJson.fromJson(
+                json.replace("\"association_basis\" : \"gold\"", "\"association_basis\" : \"both\""), "a.json"));
+        assertEquals("a.json: summary.association_basis: unknown association basis 'both'; one of: gold, predicted",
+                basis.getMessage());
+    }
+
+    @Test
+    void theClosedSetsAreWrittenInTheirContractSpelling() throws Exception {
+        // docs/audit.md, "Outputs": lower-case keys, as version 1 wrote them.
+        JsonNode root = new ObjectMapper().readTree(AuditJson.toJson(sample()));
+        assertEquals("high", root.get("summary").get("settings").get("fail_on").asText());
+        assertEquals("gold", root.get("summary").get("association_basis").asText());
+        assertEquals("lines", root.get("scrub").get(0).get("mode").asText());
+        assertEquals("explained", root.get("scrub").get(0).get("scope").asText());
+    }
+
+    @Test
     void aVersionThisTelltaleDoesNotReadIsNamed(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("future.json");
         Files.writeString(file, AuditJson.toJson(sample()).replace("\"version\" : 2", "\"version\" : 3"));
@@ -152,7 +191,7 @@ class AuditJsonTest {
         Artefact a = result.artefacts().get(0);
         assertEquals("gx7relay", a.pattern());
         assertEquals(List.of("gx7relay"), a.termNames());
-        assertEquals(ArtefactAssembly.id(ArtefactIdentity.of(ArtefactKind.HEADER, "outage", "gx7relay")), a.id());
+        assertEquals(ArtefactIdentity.of(ArtefactKind.HEADER, "outage", "gx7relay").id(), a.id());
         assertEquals(12, a.scrub().flips());
         assertEquals(List.of(a.id()), result.scrub().get(0).artefacts());
         assertEquals(List.of("t-17", "t-3"), result.picks());
