@@ -10,16 +10,20 @@ import java.util.Map;
  */
 public final class OptionWords {
     /** Setting name in the core → option name on the command line. */
-    private static final Map<String, String> OPTIONS = Map.of(
-            "parallelMax", "--parallel-max",
-            "parallel", "--parallel",
-            "batch", "--batch",
-            "retries", "--retries",
-            "timeout", "--timeout",
-            "sample", "--sample",
-            "probes", "--probes",
-            "words", "--words",
-            "picks", "--picks");
+    private static final Map<String, String> OPTIONS = Map.ofEntries(
+            Map.entry("parallelMax", "--parallel-max"),
+            Map.entry("parallel", "--parallel"),
+            Map.entry("batch", "--batch"),
+            Map.entry("retries", "--retries"),
+            Map.entry("timeout", "--timeout"),
+            Map.entry("sample", "--sample"),
+            Map.entry("probes", "--probes"),
+            Map.entry("words", "--words"),
+            Map.entry("picks", "--picks"),
+            Map.entry("threshold", "--threshold"),
+            Map.entry("shingle", "--shingle"),
+            Map.entry("signature", "--signature"),
+            Map.entry("threads", "--threads"));
 
     private OptionWords() {
     }

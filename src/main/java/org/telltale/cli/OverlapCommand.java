@@ -6,11 +6,10 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.telltale.ExitCodes;
-import org.telltale.UsageException;
+import org.telltale.OptionWords;
 import org.telltale.model.TextClassifier;
 import org.telltale.overlap.AccuracyInflation;
 import org.telltale.overlap.CorpusFile;
-import org.telltale.overlap.OverlapOptions;
 import org.telltale.overlap.OverlapFinder;
 import org.telltale.overlap.OverlapResult;
 import org.telltale.overlap.OverlapSettings;
@@ -132,11 +131,12 @@ final class OverlapCommand implements Callable<Integer> {
     }
 
     private OverlapSettings settings() {
-        if (threads < 0) {
-            throw new UsageException("--threads must be 0 (one per core) or more: " + threads);
+        try {
+            return OverlapSettings.of(threshold, shingle, signature, rows, bands, seed, OverlapSettings.workers(threads),
+                    texts || html != null);
+        } catch (IllegalArgumentException e) {
+            throw OptionWords.usage(e);
         }
-        int workers = threads == 0 ? Runtime.getRuntime().availableProcessors() : threads;
-        return OverlapOptions.settings(threshold, shingle, signature, rows, bands, seed, workers, texts || html != null);
     }
 
     private CorpusSettings corpusSettings() {

@@ -15,7 +15,8 @@ public record Banding(int rows, int bands) {
 
     public Banding {
         if (rows < 1 || bands < 1) {
-            throw new IllegalArgumentException("rows and bands must be at least 1: r=" + rows + ", b=" + bands);
+            throw new IllegalArgumentException("banding needs rows and bands of at least 1: rows " + rows
+                    + ", bands " + bands);
         }
     }
 

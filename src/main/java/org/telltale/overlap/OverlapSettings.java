@@ -23,14 +23,14 @@ public record OverlapSettings(double threshold, int shingle, int signature, Band
             throw new IllegalArgumentException("threshold must be in (0, 1]: " + threshold);
         }
         if (shingle < 1) {
-            throw new IllegalArgumentException("shingle must be at least 1 word: " + shingle);
+            throw new IllegalArgumentException("shingle must be at least 1: " + shingle);
         }
         if (signature < 1) {
-            throw new IllegalArgumentException("signature must have at least 1 component: " + signature);
+            throw new IllegalArgumentException("signature must be at least 1: " + signature);
         }
         if (banding != null && banding.hashes() > signature) {
-            throw new IllegalArgumentException("rows × bands = " + banding.hashes()
-                    + " exceeds the signature length " + signature);
+            throw new IllegalArgumentException("banding of rows × bands = " + banding.hashes()
+                    + " components exceeds signature " + signature);
         }
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be at least 1: " + threads);
@@ -38,6 +38,32 @@ public record OverlapSettings(double threshold, int shingle, int signature, Band
         if (banding == null) {
             banding = Banding.forThreshold(threshold, signature);
         }
+    }
+
+    /**
+     * The settings of the options every overlap front takes under the same names, each checked
+     * once, here and in the canonical constructor, in the core's own words ({@code "shingle must be
+     * at least 1: 0"}); the fronts map the setting names to option names ({@code OptionWords}).
+     *
+     * @param rows  rows per band, or {@code null}; given together with {@code bands} or not at all
+     * @param bands number of bands, or {@code null}
+     */
+    public static OverlapSettings of(double threshold, int shingle, int signature, Integer rows, Integer bands,
+                                     long seed, int threads, boolean keepTexts) {
+        if ((rows == null) != (bands == null)) {
+            throw new IllegalArgumentException("banding needs both rows and bands, or neither: rows "
+                    + (rows == null ? "absent" : rows) + ", bands " + (bands == null ? "absent" : bands));
+        }
+        return new OverlapSettings(threshold, shingle, signature, rows == null ? null : new Banding(rows, bands), seed,
+                threads, keepTexts);
+    }
+
+    /** Worker threads for {@code threads} as the fronts take it: 0 for one per core, else the number itself. */
+    public static int workers(int threads) {
+        if (threads < 0) {
+            throw new IllegalArgumentException("threads must be 0 (one per core) or more: " + threads);
+        }
+        return threads == 0 ? Runtime.getRuntime().availableProcessors() : threads;
     }
 
     /** Defaults: threshold 0.8, 5-word shingles, 128 components, seed 1, one thread per core. */

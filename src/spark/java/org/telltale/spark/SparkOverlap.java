@@ -7,8 +7,7 @@ import org.apache.spark.api.java.JavaRDD;
 import org.apache.spark.api.java.JavaSparkContext;
 import org.apache.spark.sql.SparkSession;
 import org.telltale.ExitCodes;
-import org.telltale.UsageException;
-import org.telltale.overlap.OverlapOptions;
+import org.telltale.OptionWords;
 import org.telltale.overlap.OverlapResult;
 import org.telltale.overlap.OverlapSettings;
 import org.telltale.report.html.HtmlReports;
@@ -43,9 +42,13 @@ public final class SparkOverlap {
         Path json = o.has("--json") ? Path.of(o.required("--json")) : null;
         Path html = o.has("--html") ? Path.of(o.required("--html")) : null;
         boolean texts = o.has("--texts");
-        OverlapSettings settings = settings(o, texts || html != null);
-        if (o.integer("--threads", 0) < 0) {
-            throw new UsageException("--threads must be 0 (one per core) or more: " + o.integer("--threads", 0));
+        OverlapSettings settings;
+        try {
+            settings = settings(o, texts || html != null);
+            // --threads is read for the same check as telltale overlap's; executors bring their own cores.
+            OverlapSettings.workers(o.integer("--threads", 0));
+        } catch (IllegalArgumentException e) {
+            throw OptionWords.usage(e);
         }
         SparkCorpus.Fields fields = new SparkCorpus.Fields(o.get("--id-field", "id"), o.get("--text-field", "text"),
                 o.get("--label-field", "label"), o.has("--skip-bad"));
@@ -92,6 +95,6 @@ public final class SparkOverlap {
         Integer rows = o.integerOrNull("--rows");
         Integer bands = o.integerOrNull("--bands");
         long seed = o.longValue("--seed", 1L);
-        return OverlapOptions.settings(threshold, shingle, signature, rows, bands, seed, 1, keepTexts);
+        return OverlapSettings.of(threshold, shingle, signature, rows, bands, seed, 1, keepTexts);
     }
 }

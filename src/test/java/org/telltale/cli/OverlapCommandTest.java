@@ -150,6 +150,17 @@ class OverlapCommandTest {
     }
 
     @Test
+    void aRefusedSettingIsNamedByItsOption() throws IOException {
+        // OverlapSettings says it in the core's words, OptionWords names the option once.
+        Path file = dir.resolve("c.jsonl");
+        write(file, List.<String[]>of(new String[] {"a", "one two three", null}));
+        String[] r = run("overlap", "--train", file.toString(), "--test", file.toString(), "--shingle", "0");
+        assertEquals("telltale: --shingle must be at least 1: 0", r[2].lines().findFirst().orElse(""));
+        String[] threads = run("overlap", "--train", file.toString(), "--test", file.toString(), "--threads", "-2");
+        assertEquals("telltale: --threads must be 0 (one per core) or more: -2", threads[2].lines().findFirst().orElse(""));
+    }
+
+    @Test
     void aMissingCorpusIsAnErrorNamingTheFile() {
         String[] r = run("overlap", "--train", dir.resolve("nope.jsonl").toString(), "--test", dir.resolve("nope.jsonl").toString());
         assertEquals(Integer.toString(ExitCodes.ERROR), r[0]);

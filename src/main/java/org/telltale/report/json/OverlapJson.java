@@ -196,11 +196,25 @@ public final class OverlapJson {
         return fromJson(JsonValue.parse(json, "overlap result"));
     }
 
+    /** The settings as written; a value out of range is an error naming the file and the settings object. */
+    private static OverlapSettings settings(JsonValue s, boolean keepTexts) {
+        double threshold = s.number("threshold");
+        int shingle = s.int32("shingle");
+        int signature = s.int32("signature");
+        int rows = s.int32("rows");
+        int bands = s.int32("bands");
+        long seed = s.integer("seed");
+        try {
+            return OverlapSettings.of(threshold, shingle, signature, rows, bands, seed, 1, keepTexts);
+        } catch (IllegalArgumentException e) {
+            throw s.here(e.getMessage());
+        }
+    }
+
     private static OverlapResult fromJson(JsonValue root) {
         root.version(FORMAT, VERSION);
         JsonValue s = root.object("settings");
-        OverlapSettings settings = new OverlapSettings(s.number("threshold"), s.int32("shingle"), s.int32("signature"),
-                new Banding(s.int32("rows"), s.int32("bands")), s.integer("seed"), 1, root.has("documents"));
+        OverlapSettings settings = settings(s, root.has("documents"));
         JsonValue m = root.object("summary");
         OverlapSummary summary = new OverlapSummary(m.integer("train_documents"), m.integer("test_documents"),
                 m.integer("train_empty"), m.integer("test_empty"), m.integer("train_test_pairs"),

@@ -91,6 +91,12 @@ class OverlapJsonTest {
     }
 
     @Test
+    void aSettingOutOfRangeIsNamedWithItsPlace() {
+        String json = OverlapJson.toJson(sample()).replace("\"shingle\" : 5", "\"shingle\" : 0");
+        assertEquals("overlap result: settings: shingle must be at least 1: 0, found an object", message(json));
+    }
+
+    @Test
     void anotherVersionIsRefusedByTheOneVersionCheck() {
         String json = OverlapJson.toJson(sample()).replace("\"version\" : 1", "\"version\" : 2");
         assertEquals("overlap result: version: telltale.overlap version 2 is not supported (this Telltale reads version 1)",
