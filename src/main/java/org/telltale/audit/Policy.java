@@ -1,21 +1,21 @@
 package org.telltale.audit;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
 import java.util.regex.Pattern;
 import java.util.regex.PatternSyntaxException;
+import org.telltale.EnumKeys;
 import org.telltale.TelltaleException;
+import org.telltale.UnknownKeyException;
+import org.telltale.json.JsonValue;
 
 /**
  * A reviewer's decisions about terms, read from a JSON file:
@@ -42,8 +42,14 @@ public final class Policy {
     public enum Status {
         ACCEPTED, ARTEFACT;
 
+        /** The lower-case name used in policy files, JSON and reports. */
         public String key() {
-            return this == ACCEPTED ? "accepted" : "artefact";
+            return name().toLowerCase(Locale.ROOT);
+        }
+
+        /** @throws UnknownKeyException for a name other than {@code accepted} or {@code artefact} */
+        public static Status fromKey(String key) {
+            return EnumKeys.parse("status", key, values(), Status::key);
         }
     }
 
@@ -158,48 +164,33 @@ public final class Policy {
         return parse(json, file.toString());
     }
 
-    /** Parses policy JSON; {@code place} names its origin in errors. */
+    /**
+     * Parses policy JSON through the strict reader; {@code place} names its origin in errors, with
+     * the path of the rule and its field ({@code p.json: rules[1].note: …}). A hand-written policy
+     * may leave out {@code format} and {@code version}; given, they pass the one version check.
+     */
     public static Policy parse(String json, String place) {
-        JsonNode root;
-        try {
-            root = new ObjectMapper().readTree(json);
-        } catch (JsonProcessingException e) {
-            throw new TelltaleException(place + ": not valid JSON: " + e.getOriginalMessage()
-                    + " at line " + e.getLocation().getLineNr());
-        }
-        if (root == null || !root.isObject()) {
-            throw new TelltaleException(place + ": a policy must be a JSON object with a \"rules\" array");
-        }
-        rejectUnknown(root, TOP_KEYS, place);
-        if (root.has("format") && !FORMAT.equals(root.get("format").asText())) {
-            throw new TelltaleException(place + ": format is '" + root.get("format").asText() + "', expected '" + FORMAT + "'");
-        }
-        if (root.has("version") && root.get("version").asInt(-1) != 1) {
-            throw new TelltaleException(place + ": policy version " + root.get("version") + " is not supported (expected 1)");
-        }
-        JsonNode array = root.get("rules");
-        if (array == null || !array.isArray()) {
-            throw new TelltaleException(place + ": missing \"rules\" array");
+        JsonValue root = JsonValue.parse(json, place).requireObject();
+        rejectUnknown(root, TOP_KEYS);
+        if (root.find("format").isPresent() || root.find("version").isPresent()) {
+            root.version(FORMAT, 1);
         }
         List<Rule> rules = new ArrayList<>();
-        for (int i = 0; i < array.size(); i++) {
-            rules.add(rule(array.get(i), place + ": rules[" + i + "]"));
+        for (JsonValue rule : root.array("rules")) {
+            rules.add(rule(rule.requireObject()));
         }
         return new Policy(rules);
     }
 
-    private static Rule rule(JsonNode node, String at) {
-        if (!node.isObject()) {
-            throw new TelltaleException(at + " must be an object");
-        }
-        rejectUnknown(node, RULE_KEYS, at);
-        String term = text(node, "term", at);
-        String pattern = text(node, "pattern", at);
+    private static Rule rule(JsonValue node) {
+        rejectUnknown(node, RULE_KEYS);
+        String term = node.optionalString("term");
+        String pattern = node.optionalString("pattern");
         ArtefactKind kind = null;
         String glob = null;
         int named = (term == null ? 0 : 1) + (pattern == null ? 0 : 1);
         for (ArtefactKind k : RULE_KINDS) {
-            String g = text(node, k.key(), at);
+            String g = node.optionalString(k.key());
             if (g != null) {
                 named++;
                 kind = k;
@@ -207,49 +198,35 @@ public final class Policy {
             }
         }
         if (named != 1) {
-            throw new TelltaleException(at + " needs exactly one of \"term\", \"pattern\", \"header\", \"address\", "
+            throw node.here("a rule needs exactly one of \"term\", \"pattern\", \"header\", \"address\", "
                     + "\"identifier\" and \"boilerplate\"");
         }
-        String statusText = text(node, "status", at);
         Status status;
-        if ("accepted".equals(statusText)) {
-            status = Status.ACCEPTED;
-        } else if ("artefact".equals(statusText)) {
-            status = Status.ARTEFACT;
-        } else {
-            throw new TelltaleException(at + ": status must be \"accepted\" or \"artefact\", not " + node.get("status"));
+        String statusKey = node.string("status");
+        try {
+            status = Status.fromKey(statusKey);
+        } catch (UnknownKeyException e) {
+            throw node.at("status", e.getMessage());
         }
-        String note = text(node, "note", at);
+        String note = node.optionalString("note");
         if (note == null || note.isBlank()) {
-            throw new TelltaleException(at + ": every rule needs a \"note\" saying why");
+            throw node.at("note", "every rule needs a note saying why");
         }
         Pattern compiled = null;
         if (pattern != null) {
             try {
                 compiled = Pattern.compile(pattern);
             } catch (PatternSyntaxException e) {
-                throw new TelltaleException(at + ": bad pattern '" + pattern + "': " + e.getDescription());
+                throw node.at("pattern", "bad pattern '" + pattern + "': " + e.getDescription());
             }
         }
         return new Rule(term, compiled, kind, glob, status, note);
     }
 
-    private static String text(JsonNode node, String name, String at) {
-        JsonNode v = node.get(name);
-        if (v == null || v.isNull()) {
-            return null;
-        }
-        if (!v.isTextual()) {
-            throw new TelltaleException(at + ": \"" + name + "\" must be a string");
-        }
-        return v.asText();
-    }
-
-    private static void rejectUnknown(JsonNode node, Set<String> known, String at) {
-        for (Iterator<String> it = node.fieldNames(); it.hasNext(); ) {
-            String name = it.next();
+    private static void rejectUnknown(JsonValue node, Set<String> known) {
+        for (String name : node.fields().keySet()) {
             if (!known.contains(name)) {
-                throw new TelltaleException(at + ": unknown key \"" + name + "\" (expected one of " + known.stream().sorted().toList() + ")");
+                throw node.at(name, "unknown key (expected one of " + known.stream().sorted().toList() + ")");
             }
         }
     }

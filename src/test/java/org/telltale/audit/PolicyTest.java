@@ -34,20 +34,51 @@ class PolicyTest {
         TelltaleException noNote = assertThrows(TelltaleException.class, () -> Policy.parse(
                 "{\"rules\":[{\"term\":\"a\",\"status\":\"accepted\",\"note\":\"ok\"},{\"term\":\"b\",\"status\":\"accepted\"}]}",
                 "p.json"));
-        assertEquals("p.json: rules[1]: every rule needs a \"note\" saying why", noNote.getMessage());
+        assertEquals("p.json: rules[1].note: every rule needs a note saying why", noNote.getMessage());
         TelltaleException both = assertThrows(TelltaleException.class, () -> Policy.parse(
                 "{\"rules\":[{\"term\":\"a\",\"pattern\":\"a\",\"status\":\"artefact\",\"note\":\"x\"}]}", "p.json"));
         assertTrue(both.getMessage().contains("exactly one"), both.getMessage());
         TelltaleException status = assertThrows(TelltaleException.class, () -> Policy.parse(
                 "{\"rules\":[{\"term\":\"a\",\"status\":\"fine\",\"note\":\"x\"}]}", "p.json"));
-        assertTrue(status.getMessage().contains("\"fine\""), status.getMessage());
+        assertEquals("p.json: rules[0].status: unknown status 'fine'; one of: accepted, artefact", status.getMessage());
         TelltaleException unknown = assertThrows(TelltaleException.class, () -> Policy.parse(
                 "{\"rules\":[{\"term\":\"a\",\"status\":\"artefact\",\"note\":\"x\",\"colour\":\"red\"}]}", "p.json"));
         assertTrue(unknown.getMessage().contains("colour"), unknown.getMessage());
         TelltaleException regex = assertThrows(TelltaleException.class, () -> Policy.parse(
                 "{\"rules\":[{\"pattern\":\"(\",\"status\":\"artefact\",\"note\":\"x\"}]}", "p.json"));
-        assertTrue(regex.getMessage().startsWith("p.json: rules[0]: bad pattern"), regex.getMessage());
+        assertTrue(regex.getMessage().startsWith("p.json: rules[0].pattern: bad pattern '('"), regex.getMessage());
         assertThrows(TelltaleException.class, () -> Policy.read(Path.of("no-such-policy.json")));
+    }
+
+    @Test
+    void aMissingFieldIsNamedWithItsPath() {
+        TelltaleException e = assertThrows(TelltaleException.class,
+                () -> Policy.parse("{\"rules\":[{\"term\":\"a\",\"note\":\"x\"}]}", "p.json"));
+        assertEquals("p.json: rules[0].status: missing", e.getMessage());
+    }
+
+    @Test
+    void aMistypedFieldIsNamedWithWhatWasFound() {
+        TelltaleException e = assertThrows(TelltaleException.class,
+                () -> Policy.parse("{\"rules\":[{\"term\":7,\"status\":\"accepted\",\"note\":\"x\"}]}", "p.json"));
+        assertEquals("p.json: rules[0].term: expected a string, found the number 7", e.getMessage());
+    }
+
+    @Test
+    void anotherVersionIsRefusedByTheOneVersionCheck() {
+        TelltaleException e = assertThrows(TelltaleException.class, () -> Policy.parse(
+                "{\"format\":\"telltale.policy\",\"version\":2,\"rules\":[]}", "p.json"));
+        assertEquals("p.json: version: telltale.policy version 2 is not supported (this Telltale reads version 1)",
+                e.getMessage());
+    }
+
+    @Test
+    void aDuplicateKeyIsRefused() {
+        // RFC 8259 §4 leaves duplicate names' meaning open; the strict reader refuses them.
+        TelltaleException e = assertThrows(TelltaleException.class, () -> Policy.parse(
+                "{\"rules\":[{\"term\":\"a\",\"status\":\"accepted\",\"status\":\"artefact\",\"note\":\"x\"}]}",
+                "p.json"));
+        assertTrue(e.getMessage().startsWith("p.json: not valid JSON: Duplicate field 'status'"), e.getMessage());
     }
 
     @Test
