@@ -106,6 +106,8 @@ final class BandwidthChoice {
             SurrogateFit.Design train = weighted[h];
             SurrogateFit.Design test = weighted[1 - h];
             Surrogate s = fitter.fitUnits(train, fitter.select(train, k));
+            int[] units = s.units();
+            double[] weights = s.weights();
             double total = 0;
             double mean = 0;
             for (int i = 0; i < test.rows(); i++) {
@@ -115,9 +117,9 @@ final class BandwidthChoice {
             mean /= total;
             for (int i = 0; i < test.rows(); i++) {
                 double g = s.intercept();
-                for (int j = 0; j < s.units().length; j++) {
-                    if (test.x.present(i, s.units()[j])) {
-                        g += s.weights()[j];
+                for (int j = 0; j < units.length; j++) {
+                    if (test.x.present(i, units[j])) {
+                        g += weights[j];
                     }
                 }
                 sse += test.w[i] * (test.y[i] - g) * (test.y[i] - g);

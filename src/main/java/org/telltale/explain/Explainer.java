@@ -156,10 +156,13 @@ public final class Explainer {
         } else {
             fit = new Explanation.Fit(surrogate.intercept(), surrogate.r2(), surrogate.prediction());
             List<Unit> units = index.units();
-            for (int i = 0; i < surrogate.units().length; i++) {
-                Unit unit = units.get(surrogate.units()[i]);
-                terms.add(new Explanation.TermWeight(unit.term(), surrogate.weights()[i], surrogate.low()[i],
-                        surrogate.high()[i], unit.spans()));
+            int[] selected = surrogate.units();
+            double[] weights = surrogate.weights();
+            double[] low = surrogate.low();
+            double[] high = surrogate.high();
+            for (int i = 0; i < selected.length; i++) {
+                Unit unit = units.get(selected[i]);
+                terms.add(new Explanation.TermWeight(unit.term(), weights[i], low[i], high[i], unit.spans()));
             }
             terms.sort(Comparator.comparingDouble((Explanation.TermWeight t) -> -Math.abs(t.weight()))
                     .thenComparing(t -> t.spans().isEmpty() ? 0 : t.spans().get(0).start()));
@@ -291,14 +294,16 @@ public final class Explainer {
     }
 
     private static Map<Integer, Double> top(Surrogate s, int k) {
+        int[] units = s.units();
+        double[] weights = s.weights();
         List<Integer> order = new ArrayList<>();
-        for (int i = 0; i < s.units().length; i++) {
+        for (int i = 0; i < units.length; i++) {
             order.add(i);
         }
-        order.sort(Comparator.<Integer>comparingDouble(i -> -Math.abs(s.weights()[i])).thenComparingInt(i -> s.units()[i]));
+        order.sort(Comparator.<Integer>comparingDouble(i -> -Math.abs(weights[i])).thenComparingInt(i -> units[i]));
         Map<Integer, Double> out = new LinkedHashMap<>();
         for (int i : order.subList(0, Math.min(k, order.size()))) {
-            out.put(s.units()[i], s.weights()[i]);
+            out.put(units[i], weights[i]);
         }
         return out;
     }

@@ -98,12 +98,13 @@ final class ProbeSet {
                 throw new ClassifierException("document " + documentId + ": the model changed its labels from "
                         + labels + " to " + answer.labels());
             }
-            // The rows are the answer's own: a connector builds a fresh matrix per call, so no copy.
+            // One copy of the answer's rows per batch (a ScoreMatrix hands out copies), kept as they are.
             double[][] rows = answer.rows();
+            double[][] answerLogits = answer.logits();
             withLogits &= answer.hasLogits();
             for (int i = 0; i < texts.size(); i++) {
                 scores.add(rows[i]);
-                logits.add(answer.hasLogits() ? answer.logits()[i] : null);
+                logits.add(answerLogits == null ? null : answerLogits[i]);
             }
         }
         for (int i = 0; i < rowScores.size(); i++) {

@@ -9,10 +9,13 @@ import java.util.List;
  * validated and, for logits, normalised them. When the model answered logits (the built-in models
  * always do), {@code logits} keeps them beside the probabilities, row for row: a saturated
  * probability of 1.0 still has a finite, informative logit. Otherwise {@code logits} is null.
+ * The matrix keeps copies of the arrays it is given and hands out copies: it is a value.
  */
 public record ScoreMatrix(List<String> labels, double[][] rows, double[][] logits) {
     public ScoreMatrix {
         labels = List.copyOf(labels);
+        rows = copy(rows);
+        logits = logits == null ? null : copy(logits);
         for (double[] row : rows) {
             if (row.length != labels.size()) {
                 throw new IllegalArgumentException("row of " + row.length + " scores for " + labels.size() + " labels");
@@ -33,6 +36,26 @@ public record ScoreMatrix(List<String> labels, double[][] rows, double[][] logit
     /** Probabilities only. */
     public ScoreMatrix(List<String> labels, double[][] rows) {
         this(labels, rows, null);
+    }
+
+    /** A copy of every row of scores. */
+    @Override
+    public double[][] rows() {
+        return copy(rows);
+    }
+
+    /** A copy of every row of logits, or {@code null} without them. */
+    @Override
+    public double[][] logits() {
+        return logits == null ? null : copy(logits);
+    }
+
+    private static double[][] copy(double[][] rows) {
+        double[][] out = new double[rows.length][];
+        for (int i = 0; i < rows.length; i++) {
+            out[i] = rows[i].clone();
+        }
+        return out;
     }
 
     /** True when the model's logits came with its probabilities. */
