@@ -70,6 +70,8 @@ class ModelOptionsTest {
         assertThrows(CommandLine.ParameterException.class, () -> parse("--batch", "3"));
         assertEquals("--parallel must be at least 1: 0",
                 assertThrows(UsageException.class, () -> parse("--model", "m", "--parallel", "0").settings()).getMessage());
+        assertEquals("--parallel must be at least 1: -3",
+                assertThrows(UsageException.class, () -> parse("--model", "m", "--parallel=-3").settings()).getMessage());
         assertEquals("--parallel-max must be at least 1: 0",
                 assertThrows(UsageException.class, () -> parse("--model", "m", "--parallel-max", "0").settings()).getMessage());
         assertTrue(assertThrows(UsageException.class, () -> parse("--model", "m", "--parallel", "lots").settings())

@@ -124,7 +124,8 @@ class ModelServerTest {
             assertEquals(400, r.statusCode(), bad);
             JsonNode body = JSON.readTree(r.body());
             assertTrue(body.get("error").isTextual(), r.body());
-            assertFalse(r.body().contains("at org.") || r.body().contains("Exception"), r.body());
+            assertFalse(r.body().contains("at org."), r.body());
+            assertFalse(r.body().contains("Exception"), r.body());
         }
         HttpResponse<String> infer = post("/v2/models/support/infer", "{\"inputs\":[{\"datatype\":\"FP32\",\"shape\":[1],\"data\":[1]}]}");
         assertEquals(400, infer.statusCode());
