@@ -23,7 +23,10 @@ public final class OptionWords {
             Map.entry("threshold", "--threshold"),
             Map.entry("shingle", "--shingle"),
             Map.entry("signature", "--signature"),
-            Map.entry("threads", "--threads"));
+            Map.entry("threads", "--threads"),
+            Map.entry("port", "--port"),
+            Map.entry("maxBatch", "--max-batch"),
+            Map.entry("maxBody", "--max-body"));
 
     private OptionWords() {
     }

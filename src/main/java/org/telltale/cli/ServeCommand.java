@@ -6,7 +6,7 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import org.telltale.ExitCodes;
-import org.telltale.UsageException;
+import org.telltale.OptionWords;
 import org.telltale.model.BuiltinModel;
 import org.telltale.model.ModelFile;
 import org.telltale.serve.ModelServer;
@@ -94,7 +94,7 @@ final class ServeCommand implements Callable<Integer> {
                     .withMaxBody(maxBody);
             return threads == null ? s : s.withThreads(threads);
         } catch (IllegalArgumentException e) {
-            throw new UsageException(e.getMessage());
+            throw OptionWords.usage(e);
         }
     }
 }

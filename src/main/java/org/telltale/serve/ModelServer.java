@@ -73,7 +73,7 @@ public final class ModelServer implements AutoCloseable {
         ServerTuning.apply(settings.requestTime());
         InetSocketAddress address = new InetSocketAddress(settings.host(), settings.port());
         if (address.isUnresolved()) {
-            throw new TelltaleException("--host " + settings.host() + ": unknown host");
+            throw new TelltaleException("cannot listen on " + settings.host() + ":" + settings.port() + ": unknown host");
         }
         HttpServer http;
         try {

@@ -35,10 +35,10 @@ public record ServerSettings(String host, int port, int threads, String name, in
             throw new IllegalArgumentException("threads must be at least 1: " + threads);
         }
         if (maxBatch < 1) {
-            throw new IllegalArgumentException("max batch must be at least 1: " + maxBatch);
+            throw new IllegalArgumentException("maxBatch must be at least 1: " + maxBatch);
         }
         if (maxBody < 64) {
-            throw new IllegalArgumentException("max body must be at least 64 bytes: " + maxBody);
+            throw new IllegalArgumentException("maxBody must be at least 64: " + maxBody);
         }
         if (!name.matches("[A-Za-z0-9._-]+")) {
             throw new IllegalArgumentException("the model name may hold letters, digits, '.', '_' and '-' only: '" + name + "'");

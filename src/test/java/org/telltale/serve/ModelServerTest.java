@@ -66,6 +66,15 @@ class ModelServerTest {
     }
 
     @Test
+    void aHostThatDoesNotResolveIsNamedWithItsAddress() {
+        // RFC 6761 §6.4: names under .invalid never resolve.
+        org.telltale.TelltaleException e = org.junit.jupiter.api.Assertions.assertThrows(org.telltale.TelltaleException.class,
+                () -> ModelServer.start(model, model.labels(), ServerSettings.defaults("support").withHost("desk.invalid")
+                        .withPort(0), new PrintStream(LOG, true, StandardCharsets.UTF_8)));
+        assertEquals("cannot listen on desk.invalid:0: unknown host", e.getMessage());
+    }
+
+    @Test
     void scoreAnswersTheModelsExactDoubles() throws Exception {
         HttpResponse<String> r = post("/score", textsJson(SupportQueueModel.PROBES));
         assertEquals(200, r.statusCode(), r.body());
