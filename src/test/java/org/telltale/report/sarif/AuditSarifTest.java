@@ -1,4 +1,4 @@
-package org.telltale.audit;
+package org.telltale.report.sarif;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -22,12 +22,14 @@ import org.apache.commons.csv.CSVPrinter;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.telltale.ExitCodes;
+import org.telltale.audit.ArtefactIdentity;
+import org.telltale.audit.ArtefactKind;
+import org.telltale.audit.AuditResult;
+import org.telltale.audit.TrainedModels;
+import org.telltale.audit.UtilityQueues;
 import org.telltale.cli.Main;
 import org.telltale.model.ModelFile;
 import org.telltale.report.json.AuditJson;
-import org.telltale.report.sarif.SarifRules;
-import org.telltale.report.sarif.SarifMultitool;
-import org.telltale.report.sarif.SarifWriter;
 import org.telltale.text.Document;
 
 /**
