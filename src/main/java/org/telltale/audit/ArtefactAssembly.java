@@ -58,7 +58,7 @@ final class ArtefactAssembly {
         boolean accepted = accepted(group);
         boolean marked = rule.map(r -> r.status() == Policy.Status.ARTEFACT)
                 .orElse(members.stream().anyMatch(c -> c.rule().map(r -> r.status() == Policy.Status.ARTEFACT).orElse(false)));
-        String status = accepted ? "accepted" : marked ? "artefact" : null;
+        Policy.Status status = accepted ? Policy.Status.ACCEPTED : marked ? Policy.Status.ARTEFACT : null;
         String note = rule.map(Policy.Rule::note).orElse(status == null ? null : members.stream()
                 .map(c -> c.rule().map(Policy.Rule::note).orElse(null)).filter(n -> n != null).findFirst().orElse(null));
 

@@ -55,7 +55,7 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
      * @param pLabelGivenTerm p̂(label | term) of that term
      * @param confirmed   whether removing this artefact alone moved predictions
      * @param suppressed  whether the policy accepts it as expected evidence
-     * @param policy      {@code accepted}, {@code artefact} or {@code null}
+     * @param policy      the status the policy gave it, or {@code null}
      * @param policyNote  the reviewer's note on the matching rule, or {@code null}
      * @param terms       its terms, most important first
      * @param scrub       the effect of removing it alone from the explained documents assigned its label
@@ -74,7 +74,7 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
             double pLabelGivenTerm,
             boolean confirmed,
             boolean suppressed,
-            String policy,
+            Policy.Status policy,
             String policyNote,
             List<ArtefactTerm> terms,
             Effect scrub,

@@ -103,7 +103,7 @@ class ArtefactAuditTest {
         List<Artefact> footer = result.artefacts().stream().filter(PLANTS.get(3)::is).toList();
         assertEquals(1, footer.size(), found);
         Artefact a = footer.get(0);
-        assertTrue(a.suppressed() && "accepted".equals(a.policy()), found);
+        assertTrue(a.suppressed() && a.policy() == Policy.Status.ACCEPTED, found);
         assertTrue(a.termNames().size() > 3, "all the footer's terms in one entry: " + a.termNames());
         assertEquals("the kiosk footer is how rentals are logged; expected", a.policyNote());
         assertTrue(result.open(Severity.LOW).stream().noneMatch(PLANTS.get(3)::is), found);

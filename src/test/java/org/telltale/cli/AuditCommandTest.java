@@ -13,6 +13,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.telltale.ExitCodes;
 import org.telltale.audit.AuditResult;
+import org.telltale.audit.Policy;
 import org.telltale.audit.Severity;
 import org.telltale.audit.TrainedModels;
 import org.telltale.audit.UtilityQueues;
@@ -87,7 +88,7 @@ class AuditCommandTest {
                 .findFirst().orElseThrow(() -> new AssertionError(result.artefacts()));
         assertTrue(blq.suppressed());
         assertEquals("BLQ-####", blq.pattern());
-        assertEquals("accepted", blq.policy());
+        assertEquals(Policy.Status.ACCEPTED, blq.policy());
         assertEquals("billing case codes are known to the router team", blq.policyNote());
         assertTrue(result.open(Severity.LOW).stream().noneMatch(f -> f.termNames().contains("blq")));
         assertTrue(result.scrub().stream().noneMatch(s -> s.artefacts().contains(blq.id())),
@@ -95,7 +96,7 @@ class AuditCommandTest {
         assertEquals(0, blq.scrub().documents());
         AuditResult.Artefact ivr = result.artefacts().stream().filter(f -> f.termNames().contains("ivr7")).findFirst()
                 .orElseThrow();
-        assertEquals("artefact", ivr.policy());
+        assertEquals(Policy.Status.ARTEFACT, ivr.policy());
         assertTrue(ivr.severity().atLeast(Severity.MEDIUM));
     }
 

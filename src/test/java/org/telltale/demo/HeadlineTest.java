@@ -76,7 +76,7 @@ class HeadlineTest {
 
     static Artefact artefact(String term, Severity severity, boolean suppressed) {
         return new Artefact("header-" + term, ArtefactKind.HEADER, severity, "billing", "X-Route: " + term, 50, 1.0, 9.0,
-                1.0, true, suppressed, suppressed ? "accepted" : null, null,
+                1.0, true, suppressed, suppressed ? org.telltale.audit.Policy.Status.ACCEPTED : null, null,
                 List.of(new AuditResult.ArtefactTerm(term, 1.0, 9.0, 0.4)), AuditResult.Effect.NONE, List.of());
     }
 }

@@ -28,6 +28,7 @@ import org.telltale.audit.AuditResult.Summary;
 import org.telltale.audit.AuditResult.TermStat;
 import org.telltale.audit.AuditSettings;
 import org.telltale.audit.FailOn;
+import org.telltale.audit.Policy;
 import org.telltale.audit.ScrubMode;
 import org.telltale.audit.ScrubScope;
 import org.telltale.audit.Severity;
@@ -184,7 +185,7 @@ public final class AuditJson {
         putNumber(o, "p_label_given_term", a.pLabelGivenTerm());
         o.put("confirmed", a.confirmed());
         o.put("suppressed", a.suppressed());
-        o.put("policy", a.policy());
+        o.put("policy", a.policy() == null ? null : a.policy().key());
         o.put("policy_note", a.policyNote());
         ArrayNode terms = o.putArray("terms");
         for (ArtefactTerm t : a.terms()) {
@@ -306,7 +307,7 @@ public final class AuditJson {
         }
         Artefact a = new Artefact(o.string("id"), kind(o, "kind"), severity(o), o.string("label"), o.string("pattern"),
                 o.integer("support"), number(o, "importance"), number(o, "association"),
-                number(o, "p_label_given_term"), o.bool("confirmed"), o.bool("suppressed"), o.optionalString("policy"),
+                number(o, "p_label_given_term"), o.bool("confirmed"), o.bool("suppressed"), status(o),
                 o.optionalString("policy_note"), terms, effect(o.object("scrub")), examples(o));
         return a;
     }
@@ -356,6 +357,11 @@ public final class AuditJson {
 
     static Severity severity(JsonValue o) {
         return key(o, "severity", Severity::fromKey);
+    }
+
+    /** The policy status of an artefact or finding, or {@code null} when the policy did not touch it. */
+    static Policy.Status status(JsonValue o) {
+        return o.optionalString("policy") == null ? null : key(o, "policy", Policy.Status::fromKey);
     }
 
     /** The enum value whose key is the string {@code field}; an unknown key is an error naming the file and the field. */
@@ -413,7 +419,7 @@ public final class AuditJson {
                 Effect effect = new Effect(0, flips, Double.NaN, number(f, "scrub_drop"), null, null);
                 artefacts.add(new Artefact(id, kind, severity(f), label, term, f.integer("support"), importance,
                         number(f, "association"), number(f, "p_label_given_term"), f.bool("confirmed"),
-                        f.bool("suppressed"), f.optionalString("policy"), f.optionalString("policy_note"),
+                        f.bool("suppressed"), status(f), f.optionalString("policy_note"),
                         List.of(new ArtefactTerm(term, importance, z, weight)), effect, examples(f)));
                 terms.add(new TermStat(term, label, kind, f.integer("support"), importance, z, number(f, "pmi"), weight,
                         f.int32("selected_in"), id));

@@ -121,7 +121,7 @@ public final class AuditSarif {
         props.put("scrubFlips", f.scrub().flips());
         props.put("scrubDrop", f.scrub().scoreDrop());
         if (f.policy() != null) {
-            props.put("policy", f.policy());
+            props.put("policy", f.policy().key());
         }
         SarifLog.Suppression suppression = f.suppressed() ? new SarifLog.Suppression(f.policyNote()) : null;
         return new Result(SarifRules.id(f.kind()), level(f.severity()), message(f),

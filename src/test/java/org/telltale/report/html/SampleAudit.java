@@ -156,7 +156,7 @@ final class SampleAudit {
                 confirmed ? 1.0 / 3 : 0, confirmed ? 0.2 : 0.01, 0.95, confirmed ? 0.6 : 0.95);
         String id = org.telltale.audit.ArtefactIdentity.of(kind, label, pattern).id();
         return new AuditResult.Artefact(id, kind, severity, label, pattern, examples.size(), importance, z, 0.96,
-                confirmed, suppressed, suppressed ? "accepted" : null,
+                confirmed, suppressed, suppressed ? org.telltale.audit.Policy.Status.ACCEPTED : null,
                 suppressed ? "refund requests are the task's own evidence" : null, terms, scrub, examples);
     }
 

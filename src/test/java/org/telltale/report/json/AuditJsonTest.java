@@ -26,6 +26,7 @@ import org.telltale.audit.AuditResult.Summary;
 import org.telltale.audit.AuditResult.TermStat;
 import org.telltale.audit.AuditSettings;
 import org.telltale.audit.FailOn;
+import org.telltale.audit.Policy;
 import org.telltale.audit.ScrubMode;
 import org.telltale.audit.ScrubScope;
 import org.telltale.audit.Severity;
@@ -45,7 +46,7 @@ class AuditJsonTest {
                 List.of(new Example("t-17", List.of(new Span(10, 18)))));
         ArtefactIdentity footer = ArtefactIdentity.of(ArtefactKind.BOILERPLATE, "billing", "Read by the meter desk");
         Artefact suppressed = new Artefact(footer.id(), ArtefactKind.BOILERPLATE, Severity.LOW, "billing",
-                "Read by the meter desk", 80, 1.1, 4.2, 0.7, false, true, "accepted", "meter talk is expected",
+                "Read by the meter desk", 80, 1.1, 4.2, 0.7, false, true, Policy.Status.ACCEPTED, "meter talk is expected",
                 List.of(new ArtefactTerm("meter", 1.0, 4.2, 0.1), new ArtefactTerm("desk", 0.45, Double.NaN, 0.02)),
                 Effect.NONE, List.of());
         Scrub kind = new Scrub("header", ScrubMode.LINES, List.of(header.id()), ScrubScope.EXPLAINED, 60, 21, 0.35, 0.28, 0.95, null);
@@ -139,6 +140,9 @@ class AuditJsonTest {
                 json.replace("\"association_basis\" : \"gold\"", "\"association_basis\" : \"both\""), "a.json"));
         assertEquals("a.json: summary.association_basis: unknown association basis 'both'; one of: gold, predicted",
                 basis.getMessage());
+        TelltaleException policy = assertThrows(TelltaleException.class, () -> AuditJson.fromJson(
+                json.replace("\"policy\" : \"accepted\"", "\"policy\" : \"fine\""), "a.json"));
+        assertEquals("a.json: artefacts[1].policy: unknown status 'fine'; one of: accepted, artefact", policy.getMessage());
     }
 
     @Test
@@ -149,6 +153,7 @@ class AuditJsonTest {
         assertEquals("gold", root.get("summary").get("association_basis").asText());
         assertEquals("lines", root.get("scrub").get(0).get("mode").asText());
         assertEquals("explained", root.get("scrub").get(0).get("scope").asText());
+        assertEquals("accepted", root.get("artefacts").get(1).get("policy").asText());
     }
 
     @Test
