@@ -44,7 +44,7 @@ public final class OptionWords {
     }
 
     /**
-     * A value the core could not read for {@code option} ({@code "unknown protocol 'grpc' (expected …)"}),
+     * A value the core could not read for {@code option} ({@code "unknown protocol 'grpc'; one of: native, …"}),
      * as a usage error that names the option first.
      */
     public static UsageException value(String option, IllegalArgumentException refused) {

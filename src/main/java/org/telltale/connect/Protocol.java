@@ -1,6 +1,7 @@
 package org.telltale.connect;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
 
 /** The JSON exchange an HTTP connector speaks with a model service. */
 public enum Protocol {
@@ -20,11 +21,7 @@ public enum Protocol {
 
     /** Parses {@code native}, {@code open-inference}, {@code instances} or {@code pipeline}, ignoring case. */
     public static Protocol byName(String name) {
-        for (Protocol p : values()) {
-            if (p.cliName().equalsIgnoreCase(name.strip())) {
-                return p;
-            }
-        }
-        throw new IllegalArgumentException("unknown protocol '" + name + "' (expected native, open-inference, instances or pipeline)");
+        return EnumKeys.parse("protocol", name == null ? null : name.strip().toLowerCase(Locale.ROOT), values(),
+                Protocol::cliName);
     }
 }

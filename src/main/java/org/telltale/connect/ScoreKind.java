@@ -1,6 +1,7 @@
 package org.telltale.connect;
 
 import java.util.Locale;
+import org.telltale.EnumKeys;
 
 /** What the numbers a model answers are: probabilities already, or logits that need a softmax. */
 public enum ScoreKind {
@@ -11,12 +12,9 @@ public enum ScoreKind {
         return name().toLowerCase(Locale.ROOT);
     }
 
+    /** Parses {@code probabilities} or {@code logits}, ignoring case; @throws org.telltale.UnknownKeyException otherwise */
     public static ScoreKind byName(String name) {
-        for (ScoreKind k : values()) {
-            if (k.cliName().equalsIgnoreCase(name.strip())) {
-                return k;
-            }
-        }
-        throw new IllegalArgumentException("unknown score kind '" + name + "' (expected probabilities or logits)");
+        return EnumKeys.parse("score kind", name == null ? null : name.strip().toLowerCase(Locale.ROOT), values(),
+                ScoreKind::cliName);
     }
 }
