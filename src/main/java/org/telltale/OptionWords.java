@@ -26,7 +26,14 @@ public final class OptionWords {
             Map.entry("threads", "--threads"),
             Map.entry("port", "--port"),
             Map.entry("maxBatch", "--max-batch"),
-            Map.entry("maxBody", "--max-body"));
+            Map.entry("maxBody", "--max-body"),
+            Map.entry("ngrams", "--ngrams"),
+            Map.entry("holdout", "--holdout"),
+            Map.entry("smoothing", "--smoothing"),
+            Map.entry("l2", "--l2"),
+            Map.entry("maxIterations", "--max-iterations"),
+            Map.entry("bandwidth", "--bandwidth"),
+            Map.entry("size", "--size"));
 
     private OptionWords() {
     }

@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.telltale.ExitCodes;
-import org.telltale.UsageException;
+import org.telltale.OptionWords;
 import org.telltale.demo.CorpusFiles;
 import org.telltale.demo.DemoCorpus;
 import org.telltale.demo.DemoOutcome;
@@ -62,11 +62,14 @@ final class DemoCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (size < SupportCorpusGenerator.MIN_SIZE) {
-            throw new UsageException("--size must be at least " + SupportCorpusGenerator.MIN_SIZE + ": " + size);
+        SupportCorpusGenerator generator;
+        try {
+            generator = new SupportCorpusGenerator(seed, size);
+        } catch (IllegalArgumentException e) {
+            throw OptionWords.usage(e);
         }
         if (generate != null) {
-            return writeCorpus(new SupportCorpusGenerator(seed, size).generate());
+            return writeCorpus(generator.generate());
         }
         return runDemo();
     }

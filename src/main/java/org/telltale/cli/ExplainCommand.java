@@ -13,6 +13,7 @@ import java.util.Set;
 import java.util.concurrent.Callable;
 import org.telltale.ExitCodes;
 import org.telltale.TelltaleException;
+import org.telltale.OptionWords;
 import org.telltale.UsageException;
 import org.telltale.explain.ExplainSettings;
 import org.telltale.explain.Explainer;
@@ -155,9 +156,6 @@ final class ExplainCommand implements Callable<Integer> {
             } catch (NumberFormatException e) {
                 throw new UsageException("--probes must be a number or auto: " + probes);
             }
-            if (budget < 2) {
-                throw new UsageException("--probes must be auto or at least 2: " + probes);
-            }
         }
         int k;
         if ("all".equals(words.strip().toLowerCase(Locale.ROOT))) {
@@ -184,7 +182,7 @@ final class ExplainCommand implements Callable<Integer> {
                     .withWeighting(Weighting.fromKey(weighting)).withSampling(Sampling.fromKey(sampling)).withAnalyzer(analyzer.spec()).withSeed(seed)
                     .withFiller(filler).withSplitHalf(splitHalf);
         } catch (IllegalArgumentException e) {
-            throw new UsageException(e.getMessage());
+            throw OptionWords.usage(e);
         }
     }
 

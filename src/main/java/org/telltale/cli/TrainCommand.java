@@ -8,7 +8,6 @@ import java.util.concurrent.Callable;
 import org.telltale.OptionWords;
 import org.telltale.TelltaleException;
 import org.telltale.UnknownKeyException;
-import org.telltale.UsageException;
 import org.telltale.model.Algorithm;
 import org.telltale.model.BuiltinModel;
 import org.telltale.model.LogisticModel;
@@ -124,22 +123,13 @@ final class TrainCommand implements Callable<Integer> {
         } catch (UnknownKeyException e) {
             throw OptionWords.value("--algorithm", e);
         }
-        if (ngrams != 1 && ngrams != 2) {
-            throw new UsageException("--ngrams must be 1 or 2: " + ngrams);
-        }
-        if (!(holdout >= 0 && holdout < 1)) {
-            throw new UsageException("--holdout must be at least 0 and below 1: " + holdout);
-        }
-        if (!(smoothing > 0) || Double.isInfinite(smoothing)) {
-            throw new UsageException("--smoothing must be a positive number: " + smoothing);
-        }
-        if (!(l2 > 0) || Double.isInfinite(l2)) {
-            throw new UsageException("--l2 must be a positive number: " + l2);
-        }
-        if (maxIterations < 1) {
-            throw new UsageException("--max-iterations must be at least 1: " + maxIterations);
+        TrainingRequest request;
+        try {
+            request = new TrainingRequest(algo, analyzer.spec(), ngrams, holdout, seed, smoothing, l2, maxIterations);
+        } catch (IllegalArgumentException e) {
+            throw OptionWords.usage(e);
         }
         analyzer.analyzer(); // a bad spec is a usage error before any reading
-        return new TrainingRequest(algo, analyzer.spec(), ngrams, holdout, seed, smoothing, l2, maxIterations);
+        return request;
     }
 }

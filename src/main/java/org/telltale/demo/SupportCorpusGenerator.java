@@ -32,7 +32,7 @@ public final class SupportCorpusGenerator {
 
     public SupportCorpusGenerator(long seed, int size) {
         if (size < MIN_SIZE) {
-            throw new IllegalArgumentException("demo corpus size must be at least " + MIN_SIZE + ": " + size);
+            throw new IllegalArgumentException("size must be at least " + MIN_SIZE + ": " + size);
         }
         this.seed = seed;
         this.size = size;

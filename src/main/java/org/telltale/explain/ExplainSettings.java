@@ -1,7 +1,6 @@
 package org.telltale.explain;
 
 import java.util.Objects;
-import org.telltale.UsageException;
 import org.telltale.text.UnitKind;
 
 /**
@@ -71,25 +70,25 @@ public record ExplainSettings(
         Objects.requireNonNull(pairing, "pairing");
         filler = filler == null ? "" : filler;
         if (words < 1) {
-            throw new UsageException("words must be at least 1: " + words);
+            throw new IllegalArgumentException("words must be at least 1: " + words);
         }
         if (probes != AUTO && probes < 2) {
-            throw new UsageException("probes must be auto or at least 2: " + probes);
+            throw new IllegalArgumentException("probes must be auto or at least 2: " + probes);
         }
         if (probeCap < 2) {
-            throw new UsageException("probe cap must be at least 2: " + probeCap);
+            throw new IllegalArgumentException("probe cap must be at least 2: " + probeCap);
         }
         if (!(bandwidth > 0) || Double.isInfinite(bandwidth)) {
-            throw new UsageException("bandwidth must be a positive number: " + bandwidth);
+            throw new IllegalArgumentException("bandwidth must be a positive number: " + bandwidth);
         }
         if (!(ridge >= 0) || Double.isInfinite(ridge)) {
-            throw new UsageException("ridge penalty must be zero or positive: " + ridge);
+            throw new IllegalArgumentException("ridge penalty must be zero or positive: " + ridge);
         }
         if (!(level > 0 && level < 1)) {
-            throw new UsageException("interval level must lie strictly between 0 and 1: " + level);
+            throw new IllegalArgumentException("interval level must lie strictly between 0 and 1: " + level);
         }
         if (maxUnits < 1) {
-            throw new UsageException("unit cap must be at least 1: " + maxUnits);
+            throw new IllegalArgumentException("unit cap must be at least 1: " + maxUnits);
         }
     }
 

@@ -92,6 +92,17 @@ class ExplainCommandTest {
     }
 
     @Test
+    void aSettingExplainSettingsRefusesIsNamedByItsOption() {
+        // ExplainSettings checks each setting once, in its words; OptionWords names the option.
+        Path model = SupportQueueModel.write(dir);
+        Run words = run("explain", "--model", model.toString(), "--text", "x", "--words", "0");
+        assertEquals("2 telltale: --words must be at least 1: 0", words.code() + " " + words.err().lines().findFirst().orElse(""));
+        Run probes = run("explain", "--model", model.toString(), "--text", "x", "--probes", "1");
+        assertEquals("2 telltale: --probes must be auto or at least 2: 1",
+                probes.code() + " " + probes.err().lines().findFirst().orElse(""));
+    }
+
+    @Test
     void refusesConflictingOrBadOptionsAsUsageErrors() {
         Path model = SupportQueueModel.write(dir);
         assertEquals(2, run("explain", "--model", model.toString()).code());

@@ -85,6 +85,13 @@ class TrainAndScoreCommandTest {
     }
 
     @Test
+    void aSettingTrainingRequestRefusesIsNamedByItsOption() throws IOException {
+        Path corpus = LibraryDeskCorpus.write(dir, 5, 1, true);
+        Run r = run("train", "--corpus", corpus.toString(), "--out", dir.resolve("m.json").toString(), "--max-iterations", "0");
+        assertEquals("2 telltale: --max-iterations must be at least 1: 0", r.code() + " " + r.err().lines().findFirst().orElse(""));
+    }
+
+    @Test
     void anUnknownAlgorithmIsAUsageErrorListingTheAlgorithms() throws IOException {
         Path corpus = LibraryDeskCorpus.write(dir, 5, 1, true);
         Run r = run("train", "--corpus", corpus.toString(), "--out", dir.resolve("m.json").toString(), "--algorithm", "tree");
