@@ -43,6 +43,12 @@ class CodecTest {
     }
 
     @Test
+    void aNativeAnswerWithoutItsScoresNamesTheMissingField() {
+        assertTrue(msg(() -> NativeCodec.parse(b("{\"labels\":[\"a\"]}"))).startsWith("the response: scores: missing"),
+                msg(() -> NativeCodec.parse(b("{\"labels\":[\"a\"]}"))));
+    }
+
+    @Test
     void openInferenceOutputIsReadFlatOrNested() {
         // Open Inference Protocol v2, REST: tensor "data" is row-major, flat or nested (from the protocol's spec).
         List<String> labels = List.of("ham", "spam");
