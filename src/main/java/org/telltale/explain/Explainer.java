@@ -106,20 +106,18 @@ public final class Explainer {
             stability = settings.splitHalf() ? 1.0 : Double.NaN;
             surrogate = fitter.fit(d, probes.rows(), TargetValues.column(probes, labelColumn, target), true, draws);
         } else {
-            BandwidthChoice.Choice choice = design(d, probes, labelColumn, target, draws, k);
-            SurrogateFit.Design design = choice.design();
-            int[] next = selectBeyond(design, k);
-            Separation.Verdict verdict = verdict(design, next, k, resolution);
-            while (settings.adaptive() && !verdict.settled() && probes.size() < settings.probeCap()) {
+            int[] firstPositions = firstPositions(index);
+            Round round = round(d, probes, labelColumn, target, draws, k, resolution, firstPositions);
+            while (settings.adaptive() && !round.verdict().settled() && probes.size() < settings.probeCap()) {
                 int n = probes.size();
+                Separation.Verdict verdict = round.verdict();
                 double wanted = Double.isFinite(verdict.probesNeeded()) ? 1.1 * verdict.probesNeeded() : 2.0 * n;
                 int grown = (int) Math.min(settings.probeCap(), Math.max(n + FIRST_ROUND, Math.min(4.0 * n, wanted)));
                 probes.add(ProbeSampler.drawPaired(d, grown - n, counts, settings.pairing(), sampling));
-                choice = design(d, probes, labelColumn, target, draws, k);
-                design = choice.design();
-                next = selectBeyond(design, k);
-                verdict = verdict(design, next, k, resolution);
+                round = round(d, probes, labelColumn, target, draws, k, resolution, firstPositions);
             }
+            Separation.Verdict verdict = round.verdict();
+            BandwidthChoice.Choice choice = round.choice();
             toGo = verdict.settled() ? 0 : Double.isFinite(verdict.probesNeeded())
                     ? (int) Math.min(Integer.MAX_VALUE, Math.ceil(verdict.probesNeeded() - probes.size())) : -1;
             if (settings.adaptive() && !verdict.settled()) {
@@ -128,11 +126,17 @@ public final class Explainer {
                         settings.probeCap(), toGo > 0 ? String.format(java.util.Locale.ROOT,
                                 " (about %d more probes would be needed)", toGo) : ""));
             }
-            // Forward selection is greedy, so its first K of K + 1 are its choice of K; the lasso
-            // path may drop a unit on the way to K + 1, so it is run again for K.
-            int[] reported = settings.select() == Selection.FORWARD
-                    ? java.util.Arrays.copyOf(next, Math.min(k, next.length)) : fitter.select(design, k);
-            surrogate = fitter.fitUnits(design, reported);
+            if (round.additive() != null) {
+                surrogate = AdditiveRanking.first(round.additive(), k);
+                notes.add(AdditiveRanking.note(d, surrogate.r2()));
+            } else {
+                // Forward selection is greedy, so its first K of K + 1 are its choice of K; the lasso
+                // path may drop a unit on the way to K + 1, so it is run again for K.
+                int[] next = round.next();
+                int[] reported = settings.select() == Selection.FORWARD
+                        ? java.util.Arrays.copyOf(next, Math.min(k, next.length)) : fitter.select(round.design(), k);
+                surrogate = fitter.fitUnits(round.design(), reported);
+            }
             bandwidth = choice.bandwidth();
             if (settings.splitHalf()) {
                 stability = stability(d, probes, TargetValues.column(probes, labelColumn, target), fixed.size());
@@ -179,6 +183,16 @@ public final class Explainer {
                 doc.label(), method);
     }
 
+    /** Where each unit first occurs in the text: the order in which tied units are reported. */
+    private static int[] firstPositions(TermIndex index) {
+        List<Unit> units = index.units();
+        int[] out = new int[units.size()];
+        for (int j = 0; j < out.length; j++) {
+            out[j] = units.get(j).spans().isEmpty() ? Integer.MAX_VALUE : units.get(j).spans().get(0).start();
+        }
+        return out;
+    }
+
     /** Effects below these are negligible for the stopping rule: half a percentage point, 0.05 in log-odds. */
     static final double PROBABILITY_RESOLUTION = 0.005;
     static final double LOG_ODDS_RESOLUTION = 0.05;
@@ -191,6 +205,31 @@ public final class Explainer {
             return new BandwidthChoice.Choice(settings.bandwidth(), design, new double[0]);
         }
         return BandwidthChoice.choose(fitter, design, probes.rows(), y, draws, settings.bandwidth(), k);
+    }
+
+    /**
+     * What one round of probes gives: the design (reweighted to the chosen bandwidth), and either
+     * the fit on every unit with its K + 1 largest weights when the model is additive here
+     * ({@link AdditiveRanking}), or the selection's K units and the one it would add next; and
+     * whether the K reported units stand apart from that next one.
+     */
+    private record Round(BandwidthChoice.Choice choice, Surrogate additive, int[] next, Separation.Verdict verdict) {
+        SurrogateFit.Design design() {
+            return choice.design();
+        }
+    }
+
+    private Round round(int d, ProbeSet probes, int labelColumn, Target target, int draws, int k, double resolution,
+            int[] firstPositions) {
+        BandwidthChoice.Choice choice = design(d, probes, labelColumn, target, draws, k);
+        SurrogateFit.Design design = choice.design();
+        Surrogate additive = AdditiveRanking.surrogate(design, k, k >= d ? k : k + 1, fitter.z(), firstPositions);
+        if (additive != null) {
+            return new Round(choice, additive, null,
+                    Separation.of(additive, Math.min(k, additive.units().length), fitter.z(), resolution, design.rows()));
+        }
+        int[] next = selectBeyond(design, k);
+        return new Round(choice, null, next, verdict(design, next, k, resolution));
     }
 
     /** The K units the selection reports and the one it would add next (every unit when K ≥ d). */
