@@ -167,7 +167,7 @@ class HttpFaultTest {
     @EnumSource(Protocol.class)
     void aWrongRowCountIsAClearError(Protocol p) throws Exception {
         String m = fails(p, null, Fault.WRONG_ROWS);
-        assertTrue(m.contains("answered 4 rows for 5 texts") || m.contains("shape [4,2]") || m.contains("has shape"), m);
+        assertTrue(m.startsWith("batch 1 (documents 0–4): the model answered 4 rows for 5 texts"), m);
     }
 
     @ParameterizedTest
@@ -191,8 +191,12 @@ class HttpFaultTest {
                 TextClassifier c = Connectors.open(settings(server.url(), p))) {
             assertCorrect(c.score(TEXTS));
             String m = assertThrows(ClassifierException.class, () -> c.score(TEXTS)).getMessage();
-            assertTrue(m.contains("labels [tiny, huge] but earlier answers had [short, long]")
-                    || m.contains("3 columns but the model names 2 labels"), m);
+            // Open Inference names its labels in the model's metadata, read once, so other labels in an
+            // answer show as a tensor that does not fit them; the other protocols name labels per answer.
+            String expected = p == Protocol.OPEN_INFERENCE
+                    ? "batch 1 (documents 0–4): the output tensor has 3 columns but the model names 2 labels [short, long]"
+                    : "batch 1 (documents 0–4): the model answered labels [tiny, huge] but earlier answers had [short, long]";
+            assertTrue(m.startsWith(expected), m);
         }
     }
 
