@@ -194,14 +194,11 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
         }
     }
 
-    /** The key of the scrub row that removes every artefact at once. */
-    public static final String ALL = "all";
-
     /**
      * The scrub test of one kind's artefacts together, or of all artefacts at once: documents
      * rewritten without them and scored again.
      *
-     * @param kind           the kind scrubbed, or {@link #ALL}
+     * @param group          the kind scrubbed, or all artefacts at once ({@link ScrubGroup#ALL})
      * @param mode           how the kind is cut ({@link ScrubMode}), {@code MIXED} for several modes at once
      * @param artefacts      the ids of the artefacts removed
      * @param scope          the explained documents or the whole corpus (setting {@code scrubAll})
@@ -213,7 +210,7 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
      * @param accuracyAfter  accuracy after it, or {@code null}
      */
     public record Scrub(
-            String kind,
+            ScrubGroup group,
             ScrubMode mode,
             List<String> artefacts,
             ScrubScope scope,
@@ -225,7 +222,7 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
             Double accuracyAfter) {
 
         public Scrub {
-            Objects.requireNonNull(kind, "kind");
+            Objects.requireNonNull(group, "group");
             Objects.requireNonNull(mode, "mode");
             Objects.requireNonNull(scope, "scope");
             artefacts = List.copyOf(artefacts);
@@ -233,7 +230,7 @@ public record AuditResult(Summary summary, List<Artefact> artefacts, List<Scrub>
 
         /** Whether this row removed every artefact at once. */
         public boolean all() {
-            return ALL.equals(kind);
+            return group.all();
         }
     }
 }

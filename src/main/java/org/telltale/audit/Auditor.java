@@ -432,18 +432,18 @@ public final class Auditor {
         }
         List<Scrub> out = new ArrayList<>();
         for (Map.Entry<ArtefactKind, List<String>> e : byKind.entrySet()) {
-            out.add(scrubRow(e.getKey().key(), ScrubMode.of(e.getKey()), e.getValue(),
+            out.add(scrubRow(ScrubGroup.of(e.getKey()), ScrubMode.of(e.getKey()), e.getValue(),
                     effects.of(jobs.kinds().get(e.getKey()))));
         }
         if (!open.isEmpty()) {
-            out.add(scrubRow(AuditResult.ALL, byKind.size() == 1 ? out.get(0).mode() : ScrubMode.MIXED, open,
+            out.add(scrubRow(ScrubGroup.ALL, byKind.size() == 1 ? out.get(0).mode() : ScrubMode.MIXED, open,
                     effects.of(jobs.all())));
         }
         return out;
     }
 
-    private Scrub scrubRow(String kind, ScrubMode mode, List<String> artefacts, ScrubTest.Effect effect) {
-        return new Scrub(kind, mode, artefacts, ScrubScope.of(settings.scrubAll()), effect.documents(),
+    private Scrub scrubRow(ScrubGroup group, ScrubMode mode, List<String> artefacts, ScrubTest.Effect effect) {
+        return new Scrub(group, mode, artefacts, ScrubScope.of(settings.scrubAll()), effect.documents(),
                 effect.flips(), effect.flipRate(), effect.meanDrop(), effect.accuracyBefore(), effect.accuracyAfter());
     }
 

@@ -61,7 +61,7 @@ final class AuditPrinter {
             out.printf(Locale.ROOT, "  %-11s %-7s %9s %9s %10s %9s %9s%n", "removed", "mode", "documents", "flip rate",
                     "score drop", "acc. was", "acc. now");
             for (Scrub x : result.scrub()) {
-                out.printf(Locale.ROOT, "  %-11s %-7s %9d %9.3f %10.3f %9s %9s%n", x.all() ? "all at once" : x.kind(),
+                out.printf(Locale.ROOT, "  %-11s %-7s %9d %9.3f %10.3f %9s %9s%n", x.all() ? "all at once" : x.group().key(),
                         x.mode().key(), x.documents(), x.flipRate(), x.scoreDrop(), share(x.accuracyBefore()),
                         share(x.accuracyAfter()));
             }

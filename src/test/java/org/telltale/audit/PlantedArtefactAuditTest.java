@@ -58,11 +58,11 @@ class PlantedArtefactAuditTest {
         // predicted queue's score drops, for every kind planted.
         for (ArtefactKind kind : List.of(ArtefactKind.HEADER, ArtefactKind.ADDRESS, ArtefactKind.IDENTIFIER,
                 ArtefactKind.BOILERPLATE)) {
-            AuditResult.Scrub scrub = result.scrub().stream().filter(s -> s.kind().equals(kind.key())).findFirst()
+            AuditResult.Scrub scrub = result.scrub().stream().filter(s -> s.group().equals(ScrubGroup.of(kind))).findFirst()
                     .orElseThrow();
             assertTrue(scrub.documents() > 0 && scrub.scoreDrop() > 0, scrub.toString());
         }
-        AuditResult.Scrub boilerplate = result.scrub().stream().filter(s -> s.kind().equals("boilerplate"))
+        AuditResult.Scrub boilerplate = result.scrub().stream().filter(s -> s.group().equals(ScrubGroup.of(ArtefactKind.BOILERPLATE)))
                 .findFirst().orElseThrow();
         assertEquals(ScrubMode.LINES, boilerplate.mode());
         assertTrue(boilerplate.flipRate() > 0.1, boilerplate.toString());

@@ -78,7 +78,7 @@ class SpamAssassinAuditTest {
                 assertTrue(inHeader > 0 && inHeader * 2 >= all, term + ": " + inHeader + " of " + all + " in headers");
             }
         }
-        AuditResult.Scrub scrub = result.scrub().stream().filter(s -> s.kind().equals("header")).findFirst()
+        AuditResult.Scrub scrub = result.scrub().stream().filter(s -> s.group().equals(ScrubGroup.of(ArtefactKind.HEADER))).findFirst()
                 .orElseThrow(() -> new AssertionError("no header scrub: " + result.scrub()));
         // Removing the header artefacts' field lines (not whole header blocks) rewrites messages;
         // naive Bayes on whole messages is often saturated, so the kind's scrub need not flip one.

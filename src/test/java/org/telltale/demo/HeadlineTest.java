@@ -3,6 +3,7 @@ package org.telltale.demo;
 import org.telltale.audit.AssociationBasis;
 import org.telltale.audit.FailOn;
 import org.telltale.audit.ScrubScope;
+import org.telltale.audit.ScrubGroup;
 import org.telltale.audit.ScrubMode;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
@@ -28,7 +29,7 @@ class HeadlineTest {
         AuditResult audit = audit(500, 0.96,
                 List.of(scrub("header", "lines", "corpus", 100, 0.98, 0.50, 2),
                         scrub("boilerplate", "lines", "corpus", 80, 0.95, 0.90, 1),
-                        scrub(AuditResult.ALL, "mixed", "corpus", 150, 0.98, 0.40, 3)),
+                        scrub("all", "mixed", "corpus", 150, 0.98, 0.40, 3)),
                 artefacts);
         Headline h = Headline.of(audit);
         assertEquals(0.786, h.accuracyAfter(), 1e-12);
@@ -47,7 +48,7 @@ class HeadlineTest {
 
     @Test
     void explainedScopeSpeaksOfTheScrubbedMessagesOnly() {
-        AuditResult audit = audit(500, 0.96, List.of(scrub(AuditResult.ALL, "matches", "explained", 40, 1.0, 0.75, 1)),
+        AuditResult audit = audit(500, 0.96, List.of(scrub("all", "matches", "explained", 40, 1.0, 0.75, 1)),
                 List.of(artefact("hr", Severity.HIGH, false)));
         assertEquals("accuracy on the 40 scrubbed messages 1.00 → 0.75 once its artefact is removed; 1 artefact, 1 high",
                 Headline.of(audit).text());
@@ -69,7 +70,7 @@ class HeadlineTest {
     }
 
     static Scrub scrub(String kind, String mode, String scope, int docs, double before, double after, int artefacts) {
-        return new Scrub(kind, ScrubMode.fromKey(mode), java.util.Collections.nCopies(artefacts, "header-0"),
+        return new Scrub(ScrubGroup.fromKey(kind), ScrubMode.fromKey(mode), java.util.Collections.nCopies(artefacts, "header-0"),
                 ScrubScope.fromKey(scope), docs, docs / 2, 0.5, 0.3,
                 before, after);
     }

@@ -29,7 +29,7 @@ final class ScrubCharts {
             double before = accuracy ? s.accuracyBefore() : 1.0;
             double after = accuracy ? s.accuracyAfter() : 1.0 - s.flipRate();
             int y = TOP + i * ROW;
-            rows.add(new AuditView.ScrubRow(s.all() ? "all at once" : s.kind(), s.mode().key(), Integer.toString(y),
+            rows.add(new AuditView.ScrubRow(s.all() ? "all at once" : s.group().key(), s.mode().key(), Integer.toString(y),
                     Integer.toString(y + BAR + 2), Integer.toString(BAR), width(before), width(after),
                     Numbers.percent(before), Numbers.percent(after), Numbers.percent(s.flipRate()),
                     Numbers.plain(s.scoreDrop(), 3), s.documents(), s.flips(),

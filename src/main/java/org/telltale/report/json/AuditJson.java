@@ -29,6 +29,7 @@ import org.telltale.audit.AuditResult.TermStat;
 import org.telltale.audit.AuditSettings;
 import org.telltale.audit.FailOn;
 import org.telltale.audit.Policy;
+import org.telltale.audit.ScrubGroup;
 import org.telltale.audit.ScrubMode;
 import org.telltale.audit.ScrubScope;
 import org.telltale.audit.Severity;
@@ -221,7 +222,7 @@ public final class AuditJson {
 
     private static ObjectNode scrubTree(Scrub s) {
         ObjectNode o = MAPPER.createObjectNode();
-        o.put("kind", s.kind());
+        o.put("kind", s.group().key());
         o.put("mode", s.mode().key());
         ArrayNode ids = o.putArray("artefacts");
         s.artefacts().forEach(ids::add);
@@ -335,11 +336,7 @@ public final class AuditJson {
     }
 
     private static Scrub scrub(JsonValue o) {
-        String kind = o.string("kind");
-        if (!AuditResult.ALL.equals(kind)) {
-            kind(o, "kind");
-        }
-        return new Scrub(kind, key(o, "mode", ScrubMode::fromKey), o.strings("artefacts"), key(o, "scope", ScrubScope::fromKey),
+        return new Scrub(key(o, "kind", ScrubGroup::fromKey), key(o, "mode", ScrubMode::fromKey), o.strings("artefacts"), key(o, "scope", ScrubScope::fromKey),
                 o.int32("documents"),
                 o.int32("flips"), number(o, "flip_rate"), number(o, "score_drop"), nullable(o, "accuracy_before"),
                 nullable(o, "accuracy_after"));
@@ -364,8 +361,8 @@ public final class AuditJson {
         return o.optionalString("policy") == null ? null : key(o, "policy", Policy.Status::fromKey);
     }
 
-    /** The enum value whose key is the string {@code field}; an unknown key is an error naming the file and the field. */
-    static <E extends Enum<E>> E key(JsonValue o, String field, Function<String, E> fromKey) {
+    /** The value of a closed set whose key is the string {@code field}; an unknown key is an error naming the file and the field. */
+    static <E> E key(JsonValue o, String field, Function<String, E> fromKey) {
         String key = o.string(field);
         try {
             return fromKey.apply(key);
@@ -430,7 +427,7 @@ public final class AuditJson {
                 List<String> ids = artefacts.stream().filter(a -> a.kind() == kind && !a.suppressed())
                         .map(Artefact::id).toList();
                 s.strings("terms");
-                scrub.add(new Scrub(kind.key(), key(s, "mode", ScrubMode::fromKey), ids, key(s, "scope", ScrubScope::fromKey),
+                scrub.add(new Scrub(ScrubGroup.of(kind), key(s, "mode", ScrubMode::fromKey), ids, key(s, "scope", ScrubScope::fromKey),
                         s.int32("documents"),
                         s.int32("flips"), number(s, "flip_rate"), number(s, "score_drop"),
                         nullable(s, "accuracy_before"), nullable(s, "accuracy_after")));

@@ -3,6 +3,7 @@ package org.telltale.report.html;
 import org.telltale.audit.AssociationBasis;
 import org.telltale.audit.FailOn;
 import org.telltale.audit.ScrubScope;
+import org.telltale.audit.ScrubGroup;
 import org.telltale.audit.ScrubMode;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -101,13 +102,13 @@ final class SampleAudit {
                 artefact("refund", List.of("refund"), ArtefactKind.CONTENT, Severity.LOW, "billing", 0.12, 9.6, false,
                         true, examples.get("refund")));
         List<AuditResult.Scrub> scrub = List.of(
-                new AuditResult.Scrub("header", ScrubMode.LINES, List.of(artefacts.get(0).id()), ScrubScope.EXPLAINED, documents / 3,
+                new AuditResult.Scrub(ScrubGroup.of(ArtefactKind.HEADER), ScrubMode.LINES, List.of(artefacts.get(0).id()), ScrubScope.EXPLAINED, documents / 3,
                         documents / 8, 0.375, 0.212, 0.93, 0.71),
-                new AuditResult.Scrub("boilerplate", ScrubMode.LINES, List.of(artefacts.get(1).id()), ScrubScope.EXPLAINED, documents / 3,
+                new AuditResult.Scrub(ScrubGroup.of(ArtefactKind.BOILERPLATE), ScrubMode.LINES, List.of(artefacts.get(1).id()), ScrubScope.EXPLAINED, documents / 3,
                         documents / 20, 0.15, 0.094, 0.91, 0.84),
-                new AuditResult.Scrub("address", ScrubMode.MATCHES, List.of(artefacts.get(2).id()), ScrubScope.EXPLAINED, documents / 4,
+                new AuditResult.Scrub(ScrubGroup.of(ArtefactKind.ADDRESS), ScrubMode.MATCHES, List.of(artefacts.get(2).id()), ScrubScope.EXPLAINED, documents / 4,
                         0, 0.0, 0.004, 0.9, 0.9),
-                new AuditResult.Scrub(AuditResult.ALL, ScrubMode.MIXED, artefacts.subList(0, 3).stream()
+                new AuditResult.Scrub(ScrubGroup.ALL, ScrubMode.MIXED, artefacts.subList(0, 3).stream()
                         .map(AuditResult.Artefact::id).toList(), ScrubScope.EXPLAINED, documents / 2, documents / 6, 0.33, 0.18,
                         0.92, 0.66));
         List<AuditResult.TermStat> terms = new ArrayList<>();

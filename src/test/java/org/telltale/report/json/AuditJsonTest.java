@@ -27,6 +27,7 @@ import org.telltale.audit.AuditResult.TermStat;
 import org.telltale.audit.AuditSettings;
 import org.telltale.audit.FailOn;
 import org.telltale.audit.Policy;
+import org.telltale.audit.ScrubGroup;
 import org.telltale.audit.ScrubMode;
 import org.telltale.audit.ScrubScope;
 import org.telltale.audit.Severity;
@@ -49,8 +50,8 @@ class AuditJsonTest {
                 "Read by the meter desk", 80, 1.1, 4.2, 0.7, false, true, Policy.Status.ACCEPTED, "meter talk is expected",
                 List.of(new ArtefactTerm("meter", 1.0, 4.2, 0.1), new ArtefactTerm("desk", 0.45, Double.NaN, 0.02)),
                 Effect.NONE, List.of());
-        Scrub kind = new Scrub("header", ScrubMode.LINES, List.of(header.id()), ScrubScope.EXPLAINED, 60, 21, 0.35, 0.28, 0.95, null);
-        Scrub all = new Scrub(AuditResult.ALL, ScrubMode.LINES, List.of(header.id()), ScrubScope.EXPLAINED, 60, 21, 0.35, 0.28, 0.95, null);
+        Scrub kind = new Scrub(ScrubGroup.of(ArtefactKind.HEADER), ScrubMode.LINES, List.of(header.id()), ScrubScope.EXPLAINED, 60, 21, 0.35, 0.28, 0.95, null);
+        Scrub all = new Scrub(ScrubGroup.ALL, ScrubMode.LINES, List.of(header.id()), ScrubScope.EXPLAINED, 60, 21, 0.35, 0.28, 0.95, null);
         List<TermStat> terms = List.of(new TermStat("gx7relay", "outage", ArtefactKind.HEADER, 43, 2.5, 5.9, 0.93, 0.31, 28,
                 header.id()), new TermStat("power", "outage", ArtefactKind.CONTENT, 120, 0.9, 2.2, 0.4, 0.05, 11, null));
         return new AuditResult(summary, List.of(header, suppressed), List.of(kind, all), List.of("t-17", "t-3"), terms);
@@ -132,6 +133,10 @@ class AuditJsonTest {
                 () -> AuditJson.fromJson(json.replace("\"mode\" : \"lines\"", "\"mode\" : \"words\""), "a.json"));
         assertEquals("a.json: scrub[0].mode: unknown scrub mode 'words'; one of: lines, matches, terms, mixed",
                 mode.getMessage());
+        TelltaleException group = assertThrows(TelltaleException.class,
+                () -> AuditJson.fromJson(json.replace("\"kind\" : \"all\"", "\"kind\" : \"every\""), "a.json"));
+        assertEquals("a.json: scrub[1].kind: unknown scrub group 'every'; one of: header, address, identifier, boilerplate, "
+                + "content, all", group.getMessage());
         TelltaleException gate = assertThrows(TelltaleException.class,
                 () -> AuditJson.fromJson(json.replace("\"fail_on\" : \"high\"", "\"fail_on\" : \"sometimes\""), "a.json"));
         assertEquals("a.json: summary.settings.fail_on: unknown gate 'sometimes'; one of: high, medium, low, never",
