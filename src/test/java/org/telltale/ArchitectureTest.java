@@ -9,6 +9,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 
@@ -51,6 +53,48 @@ class ArchitectureTest {
                 if (source.contains("import org.telltale." + banned + ".")
                         || source.contains("import static org.telltale." + banned + ".")) {
                     offenders.add(file + " imports " + banned);
+                }
+            }
+        }
+        assertTrue(offenders.isEmpty(), String.join("\n", offenders));
+    }
+
+    /**
+     * Core code names a setting in its own words, and only the fronts write option names
+     * (DEVELOPERS.md, "Validating a setting"): no string literal outside cli holds {@code --name},
+     * and every placeholder {@code {name}} in one is a setting {@link OptionWords} can render.
+     */
+    @Test
+    void coreCodeWritesNoOptionNamesOnlyPlaceholdersTheFrontsRender() throws IOException {
+        Pattern literal = Pattern.compile("\"(?:[^\"\\\\]|\\\\.)*\"");
+        Pattern option = Pattern.compile("--(?!tt-)[a-z]"); // --tt-…: the reports' CSS custom properties (Palette)
+        Pattern placeholder = Pattern.compile("\\{([a-z][A-Za-z0-9]*)\\}");
+        // The demo generator's document templates fill slots of their own ("charged twice for {month}").
+        List<Path> ownSlots = List.of(MAIN.resolve("demo/Phrasebook.java"), MAIN.resolve("demo/MessageComposer.java"));
+        List<String> offenders = new ArrayList<>();
+        for (Path file : javaFiles()) {
+            if (file.startsWith(MAIN.resolve("cli"))) {
+                continue;
+            }
+            boolean slots = ownSlots.contains(file);
+            List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
+            for (int i = 0; i < lines.size(); i++) {
+                String line = lines.get(i).strip();
+                if (line.startsWith("*") || line.startsWith("/*") || line.startsWith("//")) {
+                    continue;
+                }
+                Matcher m = literal.matcher(line);
+                while (m.find()) {
+                    String text = m.group();
+                    if (option.matcher(text).find()) {
+                        offenders.add(file + ":" + (i + 1) + ": option name in " + text);
+                    }
+                    Matcher p = placeholder.matcher(text);
+                    while (!slots && p.find()) {
+                        if (!OptionWords.knows(p.group(1))) {
+                            offenders.add(file + ":" + (i + 1) + ": no setting '" + p.group(1) + "' in OptionWords: " + text);
+                        }
+                    }
                 }
             }
         }

@@ -16,6 +16,26 @@ class OptionWordsTest {
     }
 
     @Test
+    void aPlaceholderOfASettingBecomesItsOption() {
+        assertEquals("out.html: file exists; pass --force to replace it, or --out to write elsewhere",
+                OptionWords.render("out.html: file exists; pass {force} to replace it, or {out} to write elsewhere"));
+        assertEquals("a.jsonl:2: broken (--skip-bad skips and counts such lines)",
+                OptionWords.render("a.jsonl:2: broken ({skipBad} skips and counts such lines)"));
+    }
+
+    @Test
+    void bracesAroundAnythingButASettingStay() {
+        String snippet = "response: {\"labels\": [\"a\"]} {colour} {{force} {";
+        assertEquals("response: {\"labels\": [\"a\"]} {colour} {--force {", OptionWords.render(snippet));
+    }
+
+    @Test
+    void aRefusedSettingRendersItsPlaceholdersToo() {
+        assertEquals("--model exec: names no command",
+                OptionWords.usage(new IllegalArgumentException("{model} exec: names no command")).getMessage());
+    }
+
+    @Test
     void aValueTheCoreCannotReadNamesTheOptionFirst() {
         UsageException e = OptionWords.value("--protocol", new IllegalArgumentException("unknown protocol 'grpc'"));
         assertEquals("--protocol: unknown protocol 'grpc'", e.getMessage());

@@ -278,7 +278,7 @@ public final class Auditor {
             if (done.idsHash() != Journal.idsHash(ids) || done.predicted().size() != ids.size()) {
                 throw new TelltaleException(journal.file() + ": the batch at document " + (start + 1) + " (" + ids.get(0) + " to "
                         + ids.get(ids.size() - 1) + ") differs from the journal: the corpus changed since the audit "
-                        + "began; rerun without --resume and with --force to start over");
+                        + "began; rerun without {resume} and with {force} to start over");
             }
             labels = done.labels();
             predicted = done.predicted();
@@ -481,5 +481,5 @@ public final class Auditor {
     }
 
     /** Journal lines are forced to disk as work finishes, so a run that failed can always be resumed. */
-    private static final String RESUME = "the journal keeps the finished work: rerun with --resume to continue";
+    private static final String RESUME = "the journal keeps the finished work: rerun with {resume} to continue";
 }

@@ -127,7 +127,7 @@ public final class Journal implements AutoCloseable {
                         var difference = was.difference(fingerprint);
                         if (difference.isPresent()) {
                             throw new TelltaleException(file + ": cannot resume an audit whose " + difference.get()
-                                    + "; rerun without --resume and with --force to start over");
+                                    + "; rerun without {resume} and with {force} to start over");
                         }
                         started = true;
                     }
@@ -149,7 +149,7 @@ public final class Journal implements AutoCloseable {
                 }
             }
             if (!started) {
-                throw new TelltaleException(file + " is empty: nothing to resume; rerun with --force to start over");
+                throw new TelltaleException(file + " is empty: nothing to resume; rerun with {force} to start over");
             }
             FileChannel channel = FileChannel.open(file, StandardOpenOption.WRITE, LinkOption.NOFOLLOW_LINKS);
             channel.truncate(end);
@@ -244,7 +244,7 @@ public final class Journal implements AutoCloseable {
     private static void checkFormat(JsonValue start, Path file) {
         if (!start.has("format")) {
             throw new TelltaleException(file + ": not a " + FORMAT + " version " + VERSION + " journal (found an older "
-                    + "journal without a format); rerun without --resume and with --force to start over");
+                    + "journal without a format); rerun without {resume} and with {force} to start over");
         }
         start.version(FORMAT, VERSION);
     }

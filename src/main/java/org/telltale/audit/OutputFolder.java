@@ -47,13 +47,13 @@ public final class OutputFolder {
         if (!force && !resume) {
             for (String name : List.of(AUDIT, REPORT)) {
                 if (Files.exists(folder.file(name), LinkOption.NOFOLLOW_LINKS)) {
-                    throw new UsageException(folder.file(name) + " exists: use --force to overwrite it, or --out "
+                    throw new UsageException(folder.file(name) + " exists: use {force} to overwrite it, or {out} "
                             + "for another folder");
                 }
             }
             if (Files.exists(folder.file(JOURNAL), LinkOption.NOFOLLOW_LINKS)) {
-                throw new UsageException(folder.file(JOURNAL) + " holds an unfinished audit: use --resume to "
-                        + "finish it, or --force to start over");
+                throw new UsageException(folder.file(JOURNAL) + " holds an unfinished audit: use {resume} to "
+                        + "finish it, or {force} to start over");
             }
         }
         return folder;

@@ -2,12 +2,14 @@ package org.telltale.cli;
 
 import java.io.PrintWriter;
 import org.telltale.ExitCodes;
+import org.telltale.OptionWords;
 import org.telltale.TelltaleException;
 import picocli.CommandLine;
 
 /**
- * The one place where failures become output: a one-line message on stderr, the stack trace only
- * when {@code --verbose} was given, and the exit code the error carries.
+ * The one place where failures become output: a one-line message on stderr, in the options' words
+ * ({@link OptionWords#render}: the core's {@code {force}} reads {@code --force}), the stack trace
+ * only when {@code --verbose} was given, and the exit code the error carries.
  */
 final class ErrorHandler implements CommandLine.IExecutionExceptionHandler {
 
@@ -23,7 +25,7 @@ final class ErrorHandler implements CommandLine.IExecutionExceptionHandler {
     }
 
     static String oneLine(Throwable ex) {
-        String message = ex.getMessage();
+        String message = OptionWords.render(ex.getMessage());
         if (ex instanceof TelltaleException && message != null) {
             return message.replace('\n', ' ');
         }

@@ -5,6 +5,7 @@ import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import org.telltale.ExitCodes;
+import org.telltale.OptionWords;
 import picocli.CommandLine;
 
 /** Entry point of {@code telltale}: builds the command tree and maps every outcome to an exit code. */
@@ -59,7 +60,7 @@ public final class Main {
         @Override
         public int handleParseException(CommandLine.ParameterException ex, String[] args) {
             PrintWriter err = ex.getCommandLine().getErr();
-            err.println("telltale: " + ex.getMessage());
+            err.println("telltale: " + OptionWords.render(ex.getMessage()));
             err.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help' for more information.");
             err.flush();
             return ExitCodes.USAGE;

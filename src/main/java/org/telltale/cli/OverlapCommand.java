@@ -125,7 +125,7 @@ final class OverlapCommand implements Callable<Integer> {
             progress(err, "wrote " + html);
         }
         PrintWriter out = spec.commandLine().getOut();
-        out.print(OverlapSummaryText.render(result));
+        out.print(OptionWords.render(OverlapSummaryText.render(result)));
         out.flush();
         return ExitCodes.OK;
     }

@@ -50,13 +50,13 @@ final class CommandSplitter {
             }
         }
         if (quote != 0) {
-            throw new UsageException("--model exec:" + command + ": unclosed " + quote + " quote");
+            throw new UsageException("{model} exec:" + command + ": unclosed " + quote + " quote");
         }
         if (inWord) {
             words.add(word.toString());
         }
         if (words.isEmpty()) {
-            throw new UsageException("--model exec: names no command (expected exec:COMMAND ARGS…)");
+            throw new UsageException("{model} exec: names no command (expected exec:COMMAND ARGS…)");
         }
         return words;
     }

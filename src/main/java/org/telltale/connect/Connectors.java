@@ -44,7 +44,7 @@ public final class Connectors {
 
     private static TextClassifier openFile(ConnectorSettings settings) {
         if (settings.spec().matches("[A-Za-z][A-Za-z0-9+.-]*://.*")) {
-            throw new UsageException("--model " + Endpoints.safe(settings.spec()) + ": unsupported URL scheme "
+            throw new UsageException("{model} " + Endpoints.safe(settings.spec()) + ": unsupported URL scheme "
                     + "(expected http:// or https://, exec:COMMAND, or a model file)");
         }
         return inProcess(ModelFile.load(Path.of(settings.spec())), settings);
@@ -74,7 +74,7 @@ public final class Connectors {
     private static URI checkModelUrl(URI url) {
         String path = url.getPath() == null ? "" : url.getPath();
         if (!path.matches(".*/v2/models/[^/]+(/versions/[^/]+)?/?")) {
-            throw new UsageException("--model " + Endpoints.safe(url) + " with --protocol open-inference: expected the model's URL, "
+            throw new UsageException("{model} " + Endpoints.safe(url) + " with {protocol} open-inference: expected the model's URL, "
                     + "…/v2/models/NAME");
         }
         String s = url.toString();
@@ -94,7 +94,7 @@ public final class Connectors {
 
     private static void noHeaders(ConnectorSettings settings, String what) {
         if (!settings.headers().isEmpty()) {
-            throw new UsageException("--header applies to http:// and https:// models, not to " + what);
+            throw new UsageException("{header} applies to http:// and https:// models, not to " + what);
         }
     }
 

@@ -13,11 +13,11 @@ final class Endpoints {
         try {
             URI uri = new URI(spec);
             if (uri.getHost() == null) {
-                throw new UsageException("--model " + safe(spec) + ": the URL has no host");
+                throw new UsageException("{model} " + safe(spec) + ": the URL has no host");
             }
             return uri;
         } catch (URISyntaxException e) {
-            throw new UsageException("--model: not a valid URL: " + e.getReason() + " at index " + e.getIndex());
+            throw new UsageException("{model}: not a valid URL: " + e.getReason() + " at index " + e.getIndex());
         }
     }
 

@@ -26,18 +26,18 @@ final class HeaderSecrets {
         for (Map.Entry<String, String> e : headerToVariable.entrySet()) {
             String header = e.getKey();
             if (!header.matches("[!#$%&'*+.^_`|~0-9A-Za-z-]+")) {
-                throw new UsageException("--header " + header + "=" + e.getValue() + ": not a valid HTTP header name");
+                throw new UsageException("{header} " + header + "=" + e.getValue() + ": not a valid HTTP header name");
             }
             if (header.toLowerCase(Locale.ROOT).equals("content-length") || header.toLowerCase(Locale.ROOT).equals("host")) {
-                throw new UsageException("--header " + header + ": this header is set by the HTTP client");
+                throw new UsageException("{header} " + header + ": this header is set by the HTTP client");
             }
             String value = environment.apply(e.getValue());
             if (value == null || value.isEmpty()) {
-                throw new UsageException("--header " + header + "=" + e.getValue() + ": the environment variable "
+                throw new UsageException("{header} " + header + "=" + e.getValue() + ": the environment variable "
                         + e.getValue() + " is not set or empty");
             }
             if (value.chars().anyMatch(c -> c == '\r' || c == '\n')) {
-                throw new UsageException("--header " + header + "=" + e.getValue() + ": the value holds a line break");
+                throw new UsageException("{header} " + header + "=" + e.getValue() + ": the value holds a line break");
             }
             values.put(header, value);
         }

@@ -91,13 +91,13 @@ final class ResponseValidator {
         for (int j = 0; j < row.length; j++) {
             if (row[j] < 0 || row[j] > 1) {
                 throw where.error("the model answered score " + row[j] + " for " + where.document(r) + " and label '" + labels.get().get(j)
-                        + "', outside [0, 1] (if the model answers logits, use --scores logits)", raw);
+                        + "', outside [0, 1] (if the model answers logits, use {scores} logits)", raw);
             }
             sum += row[j];
         }
         if (Math.abs(sum - 1) > SUM_TOLERANCE) {
             throw where.error("the model answered scores for " + where.document(r) + " summing to " + String.format(Locale.ROOT, "%.6f", sum)
-                    + ", not 1 ± 1e-3 (if the model answers logits, use --scores logits)", raw);
+                    + ", not 1 ± 1e-3 (if the model answers logits, use {scores} logits)", raw);
         }
         return row;
     }

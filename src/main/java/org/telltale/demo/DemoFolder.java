@@ -67,7 +67,7 @@ public final class DemoFolder {
         List<Path> present = earlier.stream().filter(Files::exists).toList();
         if (!present.isEmpty() && !force) {
             throw new UsageException(root + " holds an earlier demo (" + present.get(0).getFileName()
-                    + "); pass --force to replace it or --out to write elsewhere");
+                    + "); pass {force} to replace it or {out} to write elsewhere");
         }
         try {
             for (Path file : present) {

@@ -66,7 +66,7 @@ public final class ModelFile {
      */
     public static void save(BuiltinModel model, Path path, boolean overwrite) {
         if (!overwrite && Files.exists(path)) {
-            throw new TelltaleException("model file " + path + " already exists (use --force to replace it)");
+            throw new TelltaleException("model file " + path + " already exists (use {force} to replace it)");
         }
         Path dir = path.toAbsolutePath().getParent();
         Path tmp = null;
@@ -84,7 +84,7 @@ public final class ModelFile {
             }
             tmp = null;
         } catch (FileAlreadyExistsException e) {
-            throw new TelltaleException("model file " + path + " already exists (use --force to replace it)", e);
+            throw new TelltaleException("model file " + path + " already exists (use {force} to replace it)", e);
         } catch (IOException e) {
             throw new TelltaleException("cannot write model file " + path + ": " + e.getMessage(), e);
         } finally {

@@ -43,6 +43,6 @@ public enum CorpusFormat {
             return CSV;
         }
         throw new UsageException("cannot tell the corpus format of " + path
-                + " from its name (expected a folder, .jsonl, .ndjson or .csv); choose one with --format jsonl|csv|folder");
+                + " from its name (expected a folder, .jsonl, .ndjson or .csv); choose one with {format} jsonl|csv|folder");
     }
 }

@@ -131,7 +131,7 @@ public abstract class CorpusReader implements Iterator<Document>, AutoCloseable 
                 return document;
             } catch (BadRecord bad) {
                 if (bad.reason().bad() && !skipBad) {
-                    throw new TelltaleException(bad.getMessage() + " (--skip-bad skips and counts such " + noun + "s)");
+                    throw new TelltaleException(bad.getMessage() + " ({skipBad} skips and counts such " + noun + "s)");
                 }
                 skipCounts.merge(bad.reason(), 1, Integer::sum);
                 if (skipExamples.size() < SkipReport.MAX_EXAMPLES) {

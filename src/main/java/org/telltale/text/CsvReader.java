@@ -69,7 +69,7 @@ final class CsvReader extends CorpusReader {
         if (!header.containsKey(settings.textField())) {
             parser.close();
             throw new TelltaleException(file + ": the header has no column '" + settings.textField() + "' (columns: "
-                    + String.join(", ", header.keySet()) + "); choose one with --text-field");
+                    + String.join(", ", header.keySet()) + "); choose one with {textField}");
         }
         this.columns = header.size();
         this.textColumn = header.get(settings.textField());

@@ -48,7 +48,7 @@ final class RecordFields {
     String text(JsonNode value, String place) {
         if (value == null || value.isNull()) {
             throw new BadRecord(SkipReason.MISSING_TEXT, place + ": no field '" + textField + "'"
-                    + (value == null ? "" : " (it is null)") + "; choose the text field with --text-field");
+                    + (value == null ? "" : " (it is null)") + "; choose the text field with {textField}");
         }
         if (!value.isTextual()) {
             throw new BadRecord(SkipReason.MISTYPED_FIELD, place + ": field '" + textField + "' must be a string, got " + kind(value));

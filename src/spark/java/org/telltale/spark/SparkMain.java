@@ -3,6 +3,7 @@ package org.telltale.spark;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import org.telltale.ExitCodes;
+import org.telltale.OptionWords;
 import org.telltale.TelltaleException;
 
 /**
@@ -26,10 +27,7 @@ final class SparkMain {
             return body.run(out, err);
         } catch (Exception e) {
             TelltaleException known = find(e);
-            Throwable shown = known != null ? known : e;
-            String message = shown.getMessage() == null ? shown.getClass().getSimpleName() : shown.getMessage();
-            err.println("telltale: " + (known != null ? message.replace('\n', ' ')
-                    : shown.getClass().getSimpleName() + ": " + message.replace('\n', ' ') + " (rerun with --verbose for details)"));
+            err.println("telltale: " + oneLine(e));
             if (verbose) {
                 e.printStackTrace(err);
             }
@@ -38,6 +36,19 @@ final class SparkMain {
         } finally {
             out.flush();
         }
+    }
+
+    /**
+     * The line shown for {@code e}: the first Telltale error's message in the options' words
+     * ({@link OptionWords#render}: the core's {@code {force}} reads {@code --force}), or else the
+     * failure's type and message with a hint to {@code --verbose}.
+     */
+    static String oneLine(Throwable e) {
+        TelltaleException known = find(e);
+        Throwable shown = known != null ? known : e;
+        String message = shown.getMessage() == null ? shown.getClass().getSimpleName()
+                : OptionWords.render(shown.getMessage()).replace('\n', ' ');
+        return known != null ? message : shown.getClass().getSimpleName() + ": " + message + " (rerun with --verbose for details)";
     }
 
     private static TelltaleException find(Throwable e) {

@@ -81,7 +81,7 @@ public final class SparkOverlap {
                     err.println("wrote " + html);
                 }
             }
-            out.print(OverlapSummaryText.render(result));
+            out.print(OptionWords.render(OverlapSummaryText.render(result)));
             out.flush();
         }
         return ExitCodes.OK;

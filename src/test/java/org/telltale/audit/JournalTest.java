@@ -66,8 +66,8 @@ class JournalTest {
         RunFingerprint otherSeed = RunFingerprint.builder().with("corpus_sha256", "c0ffee").with("model", "sha256:ab12")
                 .with("seed", 8).with("words", 8).build();
         TelltaleException e = assertThrows(TelltaleException.class, () -> Journal.resume(file, otherSeed));
-        assertEquals(file + ": cannot resume an audit whose seed was '7' and is now '8'; rerun without --resume and "
-                + "with --force to start over", e.getMessage());
+        assertEquals(file + ": cannot resume an audit whose seed was '7' and is now '8'; rerun without {resume} and "
+                + "with {force} to start over", e.getMessage());
     }
 
     @Test
@@ -76,7 +76,7 @@ class JournalTest {
         Files.writeString(file, "{\"type\":\"start\",\"fingerprint\":\"telltale.audit/1|seed=1\"}\n");
         TelltaleException e = assertThrows(TelltaleException.class, () -> Journal.resume(file, RUN_A));
         assertEquals(file + ": not a telltale.journal version 2 journal (found an older journal without a format); "
-                + "rerun without --resume and with --force to start over", e.getMessage());
+                + "rerun without {resume} and with {force} to start over", e.getMessage());
     }
 
     private static String resumeError(Path dir, String... lines) throws Exception {

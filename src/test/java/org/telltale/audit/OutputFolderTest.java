@@ -18,7 +18,7 @@ class OutputFolderTest {
         Path out = dir.resolve("run");
         OutputFolder.open(out, false, false).write(OutputFolder.AUDIT, "{}\n");
         UsageException refused = assertThrows(UsageException.class, () -> OutputFolder.open(out, false, false));
-        assertTrue(refused.getMessage().contains("--force"), refused.getMessage());
+        assertTrue(refused.getMessage().contains("{force}"), refused.getMessage());
         OutputFolder.open(out, true, false).write(OutputFolder.AUDIT, "{\"again\":1}\n");
         assertEquals("{\"again\":1}\n", Files.readString(out.resolve(OutputFolder.AUDIT)));
         OutputFolder.open(out, false, true);
@@ -27,7 +27,7 @@ class OutputFolderTest {
         Files.createDirectories(other);
         Files.writeString(other.resolve(OutputFolder.JOURNAL), "{}\n");
         UsageException unfinished = assertThrows(UsageException.class, () -> OutputFolder.open(other, false, false));
-        assertTrue(unfinished.getMessage().contains("--resume"), unfinished.getMessage());
+        assertTrue(unfinished.getMessage().contains("{resume}"), unfinished.getMessage());
     }
 
     @Test

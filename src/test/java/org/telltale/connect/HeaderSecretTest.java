@@ -68,7 +68,7 @@ class HeaderSecretTest {
     void aMissingVariableIsAUsageErrorThatNamesIt() {
         var e = assertThrows(UsageException.class, () -> Connectors.open(ConnectorSettings.of("http://127.0.0.1:1/score")
                 .withHeaders(Map.of("Authorization", "NOT_SET_ANYWHERE")).withEnvironment(k -> null)));
-        assertEquals("--header Authorization=NOT_SET_ANYWHERE: the environment variable NOT_SET_ANYWHERE is not set or empty",
+        assertEquals("{header} Authorization=NOT_SET_ANYWHERE: the environment variable NOT_SET_ANYWHERE is not set or empty",
                 e.getMessage());
     }
 

@@ -58,7 +58,7 @@ class CsvReaderTest {
     void aHeaderWithoutTheTextColumnNamesTheColumnsThatExist() {
         Path file = CorpusFiles.write(dir, "t.csv", "id,body\n1,x\n");
         TelltaleException e = assertThrows(TelltaleException.class, () -> Corpora.open(file, CorpusSettings.DEFAULTS));
-        assertEquals(file + ": the header has no column 'text' (columns: id, body); choose one with --text-field", e.getMessage());
+        assertEquals(file + ": the header has no column 'text' (columns: id, body); choose one with {textField}", e.getMessage());
     }
 
     @Test

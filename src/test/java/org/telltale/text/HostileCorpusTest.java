@@ -34,7 +34,7 @@ class HostileCorpusTest {
     @Test
     void invalidUtf8InJsonLinesNamesFileLineAndByteAndCanBeSkipped() {
         Path file = CorpusFiles.write(dir, "u.jsonl", concat(utf8("{\"text\": \"ok\"}\n{\"text\": \"caf"), INVALID_UTF8, utf8("\"}\n{\"text\": \"after\"}\n")));
-        assertEquals(file + ":2: invalid UTF-8 at byte 14 (Telltale reads UTF-8 only and never replaces bad bytes) (--skip-bad skips and counts such lines)",
+        assertEquals(file + ":2: invalid UTF-8 at byte 14 (Telltale reads UTF-8 only and never replaces bad bytes) ({skipBad} skips and counts such lines)",
                 message(() -> Corpora.readAll(file, STOP)));
         try (CorpusReader reader = Corpora.open(file, SKIP)) {
             assertEquals(List.of("ok", "after"), reader.readAll().stream().map(Document::text).toList());
@@ -158,7 +158,7 @@ class HostileCorpusTest {
             }
             out.write(utf8("\"}\n{\"text\": \"small\"}\n"));
         }
-        assertEquals(file + ":1: line longer than 33554432 bytes (--skip-bad skips and counts such lines)", message(() -> Corpora.readAll(file, STOP)));
+        assertEquals(file + ":1: line longer than 33554432 bytes ({skipBad} skips and counts such lines)", message(() -> Corpora.readAll(file, STOP)));
         try (CorpusReader reader = Corpora.open(file, SKIP)) {
             assertEquals(List.of("small"), reader.readAll().stream().map(Document::text).toList());
             assertEquals(1, reader.skipped().count(SkipReason.TOO_LONG));
@@ -246,7 +246,7 @@ class HostileCorpusTest {
                     file + ":3: field 'id' must be a string or an integer, got a number",
                     file + ":4: field 'id' must be a string or an integer, got a boolean",
                     file + ":5 (id 'e'): field 'label' must be a string, an integer or a boolean, got an array",
-                    file + ":6 (id 'f'): no field 'text' (it is null); choose the text field with --text-field",
+                    file + ":6 (id 'f'): no field 'text' (it is null); choose the text field with {textField}",
                     file + ":7: field 'id' is an empty string"), reader.skipped().examples());
         }
     }

@@ -68,7 +68,7 @@ class JsonLinesReaderTest {
         Path file = CorpusFiles.write(dir, "bad.jsonl", "{\"text\": \"fine\"}\n{\"text\": \"unterminated}\n");
         TelltaleException e = assertThrows(TelltaleException.class, () -> Corpora.readAll(file, CorpusSettings.DEFAULTS));
         assertTrue(e.getMessage().startsWith(file + ":2: invalid JSON"), e.getMessage());
-        assertTrue(e.getMessage().contains("--skip-bad"), e.getMessage());
+        assertTrue(e.getMessage().contains("{skipBad}"), e.getMessage());
     }
 
     @Test

@@ -98,7 +98,7 @@ public final class HtmlReports {
      */
     public static void refuseToReplace(Path out, boolean force) {
         if (Files.exists(out) && !force) {
-            throw new TelltaleException(out + ": file exists; pass --force to replace it");
+            throw new TelltaleException(out + ": file exists; pass {force} to replace it");
         }
     }
 

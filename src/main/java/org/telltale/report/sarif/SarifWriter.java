@@ -58,7 +58,7 @@ public final class SarifWriter {
     /** Refuses an existing {@code file} unless {@code force}, before any work is done. */
     public static void refuseToReplace(Path file, boolean force) {
         if (!force && Files.exists(file)) {
-            throw new TelltaleException(file + ": file exists; pass --force to replace it");
+            throw new TelltaleException(file + ": file exists; pass {force} to replace it");
         }
     }
 

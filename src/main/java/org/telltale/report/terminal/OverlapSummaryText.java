@@ -62,7 +62,7 @@ public final class OverlapSummaryText {
                         p.exact() ? "  exact" : "", label));
             }
             if (cross.size() > LISTED_PAIRS) {
-                lines.add(String.format(Locale.ROOT, "  ... and %s more (all of them in --json)", count(cross.size() - LISTED_PAIRS)));
+                lines.add(String.format(Locale.ROOT, "  ... and %s more (all of them in {json})", count(cross.size() - LISTED_PAIRS)));
             }
         }
         return String.join(System.lineSeparator(), lines) + System.lineSeparator();

@@ -130,7 +130,7 @@ class DocumentReportStructureTest {
         Path out = dir.resolve("r.html");
         HtmlReports.write("<p>one</p>", out, false);
         TelltaleException ex = assertThrows(TelltaleException.class, () -> HtmlReports.write("<p>two</p>", out, false));
-        assertTrue(ex.getMessage().contains("--force"), ex.getMessage());
+        assertTrue(ex.getMessage().contains("{force}"), ex.getMessage());
         assertEquals("<p>one</p>", Files.readString(out, StandardCharsets.UTF_8));
         HtmlReports.write("<p>two</p>", out, true);
         assertEquals("<p>two</p>", Files.readString(out, StandardCharsets.UTF_8));
