@@ -2,12 +2,19 @@ package org.telltale.model;
 
 import java.nio.file.Path;
 import java.util.HashSet;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.telltale.TelltaleException;
 import org.telltale.UnknownKeyException;
+import org.telltale.json.JsonValue;
 
-/** Checks the bound contents of a model file field by field and builds the model. */
+/**
+ * Reads a model file's fields through the strict {@link JsonValue} and builds the model. Every
+ * error names the file, the path in it ({@code labels[2]}, {@code parameters.weights[1][0]}) and
+ * what was found, as for every versioned contract.
+ */
 final class ModelFileReader {
     private final Path path;
 
@@ -15,21 +22,21 @@ final class ModelFileReader {
         this.path = path;
     }
 
-    static BuiltinModel build(Path path, ModelFile.Contents c) {
-        return new ModelFileReader(path).build(c);
+    /** The model in {@code root}, whose format and version the caller has checked. */
+    static BuiltinModel build(Path path, JsonValue root) {
+        return new ModelFileReader(path).build(root);
     }
 
-    private BuiltinModel build(ModelFile.Contents c) {
-        Algorithm algorithm = algorithm(c.algorithm());
-        List<String> labels = distinctStrings("labels", c.labels());
+    private BuiltinModel build(JsonValue root) {
+        Algorithm algorithm = algorithm(root);
+        List<String> labels = distinctStrings(root, "labels");
         if (labels.isEmpty()) {
-            throw bad("has no labels");
+            throw root.get("labels").here("expected at least one label");
         }
-        List<String> terms = distinctStrings("vocabulary", c.vocabulary());
-        Vocabulary vocabulary = new Vocabulary(terms);
-        ModelFile.Parameters p = require("parameters", c.parameters());
-        TrainingInfo training = training(c.training());
-        TermCounter counter = counter(c.analyzer(), c.ngrams());
+        Vocabulary vocabulary = new Vocabulary(distinctStrings(root, "vocabulary"));
+        JsonValue p = root.object("parameters");
+        TrainingInfo training = root.find("training").map(ModelFileReader::training).orElse(null);
+        TermCounter counter = counter(root);
         try {
             return switch (algorithm) {
                 case BAYES -> bayes(labels, counter, vocabulary, training, p);
@@ -42,114 +49,94 @@ final class ModelFileReader {
     }
 
     private NaiveBayesModel bayes(List<String> labels, TermCounter counter, Vocabulary vocabulary,
-            TrainingInfo training, ModelFile.Parameters p) {
-        double smoothing = require("parameters.smoothing", p.smoothing());
-        double[] logPrior = vector("parameters.log_prior", p.logPrior(), labels.size());
-        double[][] logLikelihood = matrix("parameters.log_likelihood", p.logLikelihood(), labels.size(),
-                vocabulary.size());
+            TrainingInfo training, JsonValue p) {
+        double smoothing = p.number("smoothing");
+        double[] logPrior = vector(p.get("log_prior"), labels.size(), "one per label");
+        double[][] logLikelihood = matrix(p.get("log_likelihood"), labels.size(), vocabulary.size());
         return new NaiveBayesModel(labels, counter, vocabulary, training, path.toString(), smoothing, logPrior,
                 logLikelihood);
     }
 
     private LogisticModel logistic(List<String> labels, TermCounter counter, Vocabulary vocabulary,
-            TrainingInfo training, ModelFile.Parameters p) {
-        String features = require("parameters.features", p.features());
+            TrainingInfo training, JsonValue p) {
+        String features = p.string("features");
         if (!features.equals(LogisticModel.FEATURES)) {
-            throw bad("has features '" + features + "', this telltale knows only '" + LogisticModel.FEATURES + "'");
+            throw p.get("features").here("expected \"" + LogisticModel.FEATURES + "\", the only features this Telltale knows");
         }
-        double l2 = require("parameters.l2", p.l2());
-        double[] intercepts = vector("parameters.intercepts", p.intercepts(), labels.size());
-        double[][] weights = matrix("parameters.weights", p.weights(), labels.size(), vocabulary.size());
-        OptimiserReport report = null;
-        ModelFile.Optimiser o = p.optimiser();
-        if (o != null) {
-            report = new OptimiserReport(String.valueOf(o.method()), orZero(o.iterations()), orZero(o.evaluations()),
-                    Boolean.TRUE.equals(o.converged()), o.objective() == null ? Double.NaN : o.objective(),
-                    o.gradientNorm() == null ? Double.NaN : o.gradientNorm());
-        }
+        double l2 = p.number("l2");
+        double[] intercepts = vector(p.get("intercepts"), labels.size(), "one per label");
+        double[][] weights = matrix(p.get("weights"), labels.size(), vocabulary.size());
+        OptimiserReport report = p.find("optimiser").map(o -> new OptimiserReport(o.string("method"),
+                o.int32("iterations"), o.int32("evaluations"), o.bool("converged"), o.numberOrNaN("objective"),
+                o.numberOrNaN("gradient_norm"))).orElse(null);
         return new LogisticModel(labels, counter, vocabulary, training, path.toString(), l2, intercepts, weights,
                 report);
     }
 
-    private Algorithm algorithm(String key) {
-        require("algorithm", key);
+    private static Algorithm algorithm(JsonValue root) {
+        String key = root.string("algorithm");
         try {
             return Algorithm.fromKey(key);
         } catch (UnknownKeyException e) {
-            throw bad("has " + e.getMessage());
+            throw root.at("algorithm", e.getMessage());
         }
     }
 
-    private TermCounter counter(String analyzer, Integer ngrams) {
-        require("analyzer", analyzer);
-        require("ngrams", ngrams);
+    private static TermCounter counter(JsonValue root) {
+        String analyzer = root.string("analyzer");
+        int ngrams = root.int32("ngrams");
         try {
             return new TermCounter(analyzer, ngrams);
         } catch (TelltaleException e) {
-            throw bad("cannot be used: " + e.getMessage());
+            throw root.at("analyzer", "cannot be used with ngrams " + ngrams + ": " + e.getMessage());
         }
     }
 
-    private TrainingInfo training(ModelFile.Training t) {
-        if (t == null) {
-            return null;
+    private static TrainingInfo training(JsonValue t) {
+        Map<String, Integer> perLabel = new LinkedHashMap<>();
+        for (Map.Entry<String, JsonValue> e : t.object("per_label").fields().entrySet()) {
+            perLabel.put(e.getKey(), e.getValue().asInt32());
         }
-        return new TrainingInfo(t.corpus(), t.corpusSha256(), orZero(t.documents()), orZero(t.trainingDocuments()),
-                orZero(t.holdoutDocuments()), t.perLabel() == null ? java.util.Map.of() : t.perLabel(),
-                t.holdout() == null ? 0 : t.holdout(), t.seed() == null ? 0 : t.seed(), t.date());
+        return new TrainingInfo(t.nullableString("corpus"), t.nullableString("corpus_sha256"), t.int32("documents"),
+                t.int32("training_documents"), t.int32("holdout_documents"), perLabel, t.number("holdout"),
+                t.integer("seed"), t.nullableString("date"));
     }
 
-    private List<String> distinctStrings(String field, List<String> values) {
-        require(field, values);
-        Set<String> seen = new HashSet<>(values.size() * 2);
-        for (int i = 0; i < values.size(); i++) {
-            String v = values.get(i);
-            if (v == null) {
-                throw bad("has a null in '" + field + "' at position " + i);
-            }
-            if (!seen.add(v)) {
-                throw bad("lists '" + v + "' twice in '" + field + "' (second at position " + i + ")");
+    private static List<String> distinctStrings(JsonValue root, String field) {
+        List<JsonValue> items = root.array(field);
+        Set<String> seen = new HashSet<>(items.size() * 2);
+        for (JsonValue item : items) {
+            if (!seen.add(item.asString())) {
+                throw item.here("expected each value once, listed again");
             }
         }
-        return values;
+        return root.strings(field);
     }
 
-    private double[] vector(String field, double[] values, int length) {
-        require(field, values);
-        if (values.length != length) {
-            throw bad("has " + values.length + " values in '" + field + "', expected " + length);
+    private static double[] vector(JsonValue array, int length, String rule) {
+        List<JsonValue> items = array.elements();
+        if (items.size() != length) {
+            throw array.here("expected " + length + " numbers, " + rule + ", not " + items.size());
         }
-        for (int i = 0; i < values.length; i++) {
+        double[] values = new double[length];
+        for (int i = 0; i < length; i++) {
+            values[i] = items.get(i).asNumber();
             if (!Double.isFinite(values[i])) {
-                throw bad("has a non-finite value in '" + field + "[" + i + "]'");
+                throw items.get(i).here("expected a finite number");
             }
         }
         return values;
     }
 
-    private double[][] matrix(String field, double[][] rows, int count, int length) {
-        require(field, rows);
-        if (rows.length != count) {
-            throw bad("has " + rows.length + " rows in '" + field + "', expected one per label (" + count + ")");
+    private static double[][] matrix(JsonValue array, int count, int length) {
+        List<JsonValue> rows = array.elements();
+        if (rows.size() != count) {
+            throw array.here("expected " + count + " rows, one per label, not " + rows.size());
         }
-        for (int c = 0; c < rows.length; c++) {
-            vector(field + "[" + c + "]", rows[c], length);
+        double[][] values = new double[count][];
+        for (int c = 0; c < count; c++) {
+            values[c] = vector(rows.get(c), length, "one per vocabulary term");
         }
-        return rows;
-    }
-
-    private <T> T require(String field, T value) {
-        if (value == null) {
-            throw bad("has no '" + field + "'");
-        }
-        return value;
-    }
-
-    private static int orZero(Integer v) {
-        return v == null ? 0 : v;
-    }
-
-    private TelltaleException bad(String what) {
-        return ModelFile.bad(path, what);
+        return values;
     }
 }

@@ -81,6 +81,6 @@ class TrainScoreIT {
         assertEquals(1, score.code());
         assertEquals("", score.out());
         assertEquals(1, score.err().strip().lines().count(), score.err());
-        assertTrue(score.err().contains(foreign + " is not a Telltale model file"), score.err());
+        assertEquals("telltale: " + foreign + ": format: missing", score.err().strip());
     }
 }

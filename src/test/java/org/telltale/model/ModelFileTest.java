@@ -101,7 +101,7 @@ class ModelFileTest {
         Path file = dir.resolve("m.json");
         Files.writeString(file, content, StandardCharsets.UTF_8);
         TelltaleException e = assertThrows(TelltaleException.class, () -> ModelFile.load(file));
-        assertTrue(e.getMessage().startsWith("model file " + file + " "), e.getMessage());
+        assertTrue(e.getMessage().startsWith(file + ": "), e.getMessage());
         assertEquals(1, e.getMessage().lines().count(), e.getMessage());
         return e.getMessage();
     }
@@ -119,17 +119,19 @@ class ModelFileTest {
         String json = valid();
         for (int cut : new int[] {1, json.length() / 3, json.length() / 2, json.length() - 3}) {
             String message = loadError(json.substring(0, cut));
-            assertTrue(message.contains("truncated"), message);
+            assertTrue(message.startsWith(dir.resolve("m.json") + ": not valid JSON: Unexpected end-of-input"), message);
         }
     }
 
     @Test
     void foreignFilesAreNamedAsNotModelFiles() throws IOException {
-        assertTrue(loadError("{\"name\": \"quarterly report\", \"rows\": [1, 2, 3]}").contains("not a Telltale model file"));
-        assertTrue(loadError("[1, 2, 3]").contains("not a Telltale model file"));
-        assertTrue(loadError("{\"format\": \"telltale.explanations\", \"version\": 1}").contains("format is 'telltale.explanations'"));
-        assertTrue(loadError("id,text,label\n1,hello,spam\n").contains("not valid JSON"));
-        assertTrue(loadError("").contains("is empty"));
+        Path m = dir.resolve("m.json");
+        assertEquals(m + ": format: missing", loadError("{\"name\": \"quarterly report\", \"rows\": [1, 2, 3]}"));
+        assertEquals(m + ": expected an object, found an array", loadError("[1, 2, 3]"));
+        assertEquals(m + ": format: expected \"telltale.model\", found \"telltale.explanations\"",
+                loadError("{\"format\": \"telltale.explanations\", \"version\": 1}"));
+        assertTrue(loadError("id,text,label\n1,hello,spam\n").startsWith(m + ": not valid JSON: "));
+        assertEquals(m + ": empty, expected JSON", loadError(""));
     }
 
     @Test
@@ -143,14 +145,32 @@ class ModelFileTest {
     @Test
     void contentAfterTheModelIsRejected() throws IOException {
         String message = loadError(valid().strip() + " {\"format\":\"telltale.model\"}");
-        assertTrue(message.contains("more content after the model"), message);
+        assertTrue(message.startsWith(dir.resolve("m.json") + ": not valid JSON: Trailing token"), message);
+    }
+
+    // The three cases every contract's test feeds (DEVELOPERS.md, "Reading a contract"): a wrong
+    // version, a missing field and a mistyped one, each named with its path and what was found.
+    @Test
+    void aWrongVersionIsNamedWithTheVersionsThisTelltaleReads() throws IOException {
+        String json = valid().replace("\"version\":1", "\"version\":2");
+        assertEquals(dir.resolve("m.json") + ": version: telltale.model version 2 is not supported (this Telltale reads version 1)",
+                loadError(json));
     }
 
     @Test
-    void newerVersionAsksForAnUpgrade() throws IOException {
-        String json = valid().replace("\"version\":1", "\"version\":2");
-        String message = loadError(json);
-        assertTrue(message.contains("version 2") && message.contains("upgrade"), message);
+    void aMissingFieldIsNamedWithItsPath() throws IOException {
+        String json = valid().replace("\"analyzer\":\"standard\",", "");
+        assertEquals(dir.resolve("m.json") + ": analyzer: missing", loadError(json));
+        String noSmoothing = valid().replace("\"smoothing\":1.0,", "");
+        assertEquals(dir.resolve("m.json") + ": parameters.smoothing: missing", loadError(noSmoothing));
+    }
+
+    @Test
+    void aMistypedFieldIsNamedWithItsPathAndWhatWasFound() throws IOException {
+        String json = valid().replace("\"labels\":[\"billing\",\"outage\"]", "\"labels\":[\"billing\",3]");
+        assertEquals(dir.resolve("m.json") + ": labels[1]: expected a string, found the number 3", loadError(json));
+        String row = valid().replaceFirst("\"log_likelihood\":\\[\\[", "\"log_likelihood\":[[\"x\",");
+        assertTrue(loadError(row).startsWith(dir.resolve("m.json") + ": parameters.log_likelihood[0]: expected "), loadError(row));
     }
 
     @Test
@@ -163,13 +183,13 @@ class ModelFileTest {
         assertTrue(loadError(json.replace("\"labels\":[\"billing\",\"outage\"]", "\"labels\":[\"billing\"]"))
                 .contains("log_prior"));
         assertTrue(loadError(json.replace("\"labels\":[\"billing\",\"outage\"]", "\"labels\":{\"a\":1}"))
-                .contains("'labels'"));
+                .contains("labels: expected an array, found an object"));
         assertTrue(loadError(json.replace("\"smoothing\":1.0", "\"smoothing\":\"one\""))
-                .contains("'parameters.smoothing'"));
+                .contains("parameters.smoothing: expected a number, found the string \"one\""));
         assertTrue(loadError(json.replace("\"labels\":[\"billing\",\"outage\"]", "\"labels\":[\"outage\",\"outage\"]"))
-                .contains("twice"));
+                .contains("labels[1]: expected each value once, listed again, found the string \"outage\""));
         assertTrue(loadError(json.replace("\"ngrams\":2", "\"ngrams\":5")).contains("ngrams"));
-        assertTrue(loadError(json.replace("\"vocabulary\":[", "\"vocabulary\":[null,")).contains("null"));
+        assertTrue(loadError(json.replace("\"vocabulary\":[", "\"vocabulary\":[null,")).contains("vocabulary[0]: expected a string, found null"));
     }
 
     @Test
