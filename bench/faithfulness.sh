@@ -1,8 +1,8 @@
 #!/usr/bin/env bash
 # Faithfulness experiment (Ribeiro, Singh & Guestrin 2016, §5.2) on a generated corpus, plus
 # calls of the adaptive budget against fixed budgets; "hard" runs the harder benchmark (HardBench) for
-# each variant ("key=value,...;..."); "long", "auto" and "nb" the stability measures (StabilityBench).
-# Usage: bench/faithfulness.sh [documents] [seed] [easy|hard|long|auto|nb] [variants]
+# each variant ("key=value,...;..."); "long", "auto", "demo" and "nb" the stability measures (StabilityBench).
+# Usage: bench/faithfulness.sh [documents] [seed] [easy|hard|long|auto|demo|nb] [variants]
 set -euo pipefail
 cd "$(dirname "$0")/.."
 mvn -q -o -B test-compile

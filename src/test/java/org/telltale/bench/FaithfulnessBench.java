@@ -52,12 +52,16 @@ public final class FaithfulnessBench {
             StabilityBench.naiveBayes(args.length > 3 ? args[3] : "defaults");
             return;
         }
+        if (mode.equals("demo")) {
+            StabilityBench.demo(documents, args.length > 3 ? args[3] : "defaults");
+            return;
+        }
         if (mode.equals("auto")) {
             StabilityBench.budget(documents, seed, args.length > 3 ? args[3] : "defaults");
             return;
         }
         if (!mode.equals("easy")) {
-            throw new IllegalArgumentException("mode must be easy, hard, long, auto or nb: " + mode);
+            throw new IllegalArgumentException("mode must be easy, hard, long, auto, demo or nb: " + mode);
         }
         Random random = new Random(seed);
         List<String> background = words(random, 1000, new HashSet<>());

@@ -55,4 +55,31 @@ final class GoldRecall {
         }
         return (double) agree / size;
     }
+
+    /**
+     * Agreement on the places that matter: of the converged answer's top k, the units whose
+     * interval excludes zero (an effect the converged answer can tell from none), the share that
+     * {@code other}'s top k reports with the same sign; 1 when the converged top k has none. Places
+     * held by units without a detectable effect are left out, since their order is sampling noise
+     * under any budget (common practice for comparing rankings with ties, here ties with zero).
+     */
+    static double effectAgreement(List<Explanation.TermWeight> converged, List<Explanation.TermWeight> other, int k) {
+        Map<String, Double> tb = top(other, k);
+        List<Explanation.TermWeight> sorted = converged.stream()
+                .sorted(java.util.Comparator.comparingDouble((Explanation.TermWeight t) -> -Math.abs(t.weight())))
+                .limit(k).toList();
+        int effects = 0;
+        int agree = 0;
+        for (Explanation.TermWeight t : sorted) {
+            if (t.low() <= 0 && 0 <= t.high()) {
+                continue;
+            }
+            effects++;
+            Double w = tb.get(t.term());
+            if (w != null && Math.signum(w) == Math.signum(t.weight())) {
+                agree++;
+            }
+        }
+        return effects == 0 ? 1.0 : (double) agree / effects;
+    }
 }

@@ -35,6 +35,18 @@ class GoldRecallTest {
         assertEquals(1.0, GoldRecall.agreement(List.of(), List.of(), 3), 1e-12);
     }
 
+    // Worked by hand: the converged top 3 is {c−, a+, b+}, of which b's interval [−0.1, 0.3] holds
+    // zero, so only c and a count; the other answer reports c with its sign and a with the wrong one.
+    @Test
+    void effectAgreementCountsOnlyConvergedPlacesWhoseIntervalExcludesZero() {
+        List<Explanation.TermWeight> converged = List.of(new Explanation.TermWeight("a", 0.5, 0.4, 0.6, List.of()),
+                new Explanation.TermWeight("b", 0.1, -0.1, 0.3, List.of()),
+                new Explanation.TermWeight("c", -0.9, -1.0, -0.8, List.of()));
+        List<Explanation.TermWeight> other = List.of(t("a", -0.5), t("e", 0.2), t("c", -0.7));
+        assertEquals(0.5, GoldRecall.effectAgreement(converged, other, 3), 1e-12);
+        assertEquals(1.0, GoldRecall.effectAgreement(List.of(t("x", 0.0)), other, 3), 1e-12);
+    }
+
     @Test
     void zeroWeightsAreNotSelected() {
         List<Explanation.TermWeight> terms = List.of(t("a", 0.0), t("b", 0.0));

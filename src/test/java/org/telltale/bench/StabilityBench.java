@@ -20,14 +20,17 @@ import org.telltale.text.Document;
  *   <li>{@code long}: top-10 agreement of two seeds (same term, same sign; common practice, e.g.
  *       Slack et al. 2021) at the default budget, on the documents with at least 200 units;
  *   <li>{@code auto}: model calls and top-10 agreement with a converged answer (20,000 probes)
- *       of the fixed default budget and of {@code --probes auto};
+ *       of the fixed default budget and of {@code --probes auto}, plain and on the places whose
+ *       converged interval excludes zero;
+ *   <li>{@code demo}: the same on the first N messages of corpora-demo/support-leaky.jsonl, for
+ *       the built-in naive Bayes and logistic models trained on it;
  *   <li>{@code nb}: the saturated model of {@code SaturatedAgreementTest} (multinomial naive Bayes
  *       on 250 + 250 whole SpamAssassin mails, explained through its logits), top-10 agreement of
  *       the seed pairs 1/2, 3/4 and 5/6 on twelve held-out mails.
  * </ul>
  *
- * Not a test: run by {@code bench/faithfulness.sh N SEED long|auto|nb [variants]} (N and SEED
- * are ignored by {@code nb}).
+ * Not a test: run by {@code bench/faithfulness.sh N SEED long|auto|demo|nb [variants]} (N and
+ * SEED are ignored by {@code nb}, SEED by {@code demo}).
  */
 final class StabilityBench {
     static final int MIN_UNITS = 200;
@@ -71,38 +74,73 @@ final class StabilityBench {
 
     static void budget(int documents, long seed, String variants) {
         HardBench.Corpus corpus = HardBench.corpus(documents, seed);
-        System.out.printf(Locale.ROOT, "auto: documents %d, seed %d, top-%d agreement with %d probes%n", documents,
-                seed, K, CONVERGED);
+        budget("harder benchmark, seed " + seed, List.of(corpus.logistic(), corpus.tree()), List.of("logistic", "tree"),
+                corpus.docs(), variants);
+    }
+
+    /**
+     * Calls and agreement with the converged answer, plain top-K and on the places that matter
+     * ({@link GoldRecall#effectAgreement}), of the fixed default budget and of {@code auto} under
+     * each variant; the converged and fixed answers are computed once for all variants.
+     */
+    static void budget(String title, List<TextClassifier> models, List<String> names, List<Document> docs,
+            String variants) {
+        System.out.printf(Locale.ROOT, "auto: %s, %d documents, top-%d agreement with %d probes (plain / on effects)%n",
+                title, docs.size(), K, CONVERGED);
         ExplainSettings base = ExplainSettings.defaults().withWords(K);
-        for (String variant : variants.split(";")) {
-            ExplainSettings settings = HardBench.apply(base, variant.strip());
-            StringBuilder line = new StringBuilder(String.format(Locale.ROOT, "%-40s", variant.strip()));
-            line.append(versus("logistic", corpus.logistic(), corpus.docs(), settings));
-            line.append(versus("tree", corpus.tree(), corpus.docs(), settings));
-            System.out.println(line);
+        for (int m = 0; m < models.size(); m++) {
+            TextClassifier model = models.get(m);
+            Explainer converged = new Explainer(model, base.withProbes(CONVERGED));
+            Explainer fixed = new Explainer(model, base.withProbes(ExplainSettings.DEFAULT_PROBES));
+            List<Explanation> refs = new ArrayList<>();
+            double[] f = new double[3];
+            for (Document doc : docs) {
+                Explanation ref = converged.explain(doc, null);
+                refs.add(ref);
+                Explanation e = fixed.explain(doc, null);
+                f[0] += e.method().calls() / (double) docs.size();
+                f[1] += GoldRecall.agreement(e.terms(), ref.terms(), K) / docs.size();
+                f[2] += GoldRecall.effectAgreement(ref.terms(), e.terms(), K) / docs.size();
+            }
+            System.out.printf(Locale.ROOT, "  %s: fixed %.0f calls, agreement %.3f / %.3f%n", names.get(m), f[0], f[1], f[2]);
+            for (String variant : variants.split(";")) {
+                ExplainSettings settings = HardBench.apply(base, variant.strip()).withProbes(ExplainSettings.AUTO);
+                Explainer auto = new Explainer(model, settings);
+                double[] a = new double[3];
+                for (int i = 0; i < docs.size(); i++) {
+                    Explanation e = auto.explain(docs.get(i), null);
+                    a[0] += e.method().calls() / (double) docs.size();
+                    a[1] += GoldRecall.agreement(e.terms(), refs.get(i).terms(), K) / docs.size();
+                    a[2] += GoldRecall.effectAgreement(refs.get(i).terms(), e.terms(), K) / docs.size();
+                }
+                System.out.printf(Locale.ROOT, "  %s: auto %-28s %.0f calls (%.0f %% of fixed), agreement %.3f / %.3f%n",
+                        names.get(m), variant.strip(), a[0], 100 * a[0] / f[0], a[1], a[2]);
+            }
         }
     }
 
-    private static String versus(String name, TextClassifier model, List<Document> docs, ExplainSettings s) {
-        Explainer converged = new Explainer(model, s.withProbes(CONVERGED));
-        Explainer fixed = new Explainer(model, s.withProbes(ExplainSettings.DEFAULT_PROBES));
-        Explainer auto = new Explainer(model, s.withProbes(ExplainSettings.AUTO));
-        List<double[]> rows = new ArrayList<>();
-        for (Document doc : docs) {
-            Explanation ref = converged.explain(doc, null);
-            Explanation f = fixed.explain(doc, null);
-            Explanation a = auto.explain(doc, null);
-            rows.add(new double[] {f.method().calls(), GoldRecall.agreement(f.terms(), ref.terms(), K),
-                    a.method().calls(), GoldRecall.agreement(a.terms(), ref.terms(), K)});
-        }
-        double[] mean = new double[4];
-        for (double[] r : rows) {
-            for (int i = 0; i < 4; i++) {
-                mean[i] += r[i] / rows.size();
+    /**
+     * {@code demo}: the same on the first {@code documents} messages of the demo corpus, for the
+     * built-in naive Bayes (the default algorithm) and logistic models trained on the whole corpus
+     * with default settings, as {@code telltale train} does.
+     */
+    static void demo(int documents, String variants) {
+        java.nio.file.Path corpus = java.nio.file.Path.of("corpora-demo/support-leaky.jsonl");
+        List<TextClassifier> models = new ArrayList<>();
+        for (org.telltale.model.Algorithm algorithm : List.of(org.telltale.model.Algorithm.BAYES,
+                org.telltale.model.Algorithm.LOGISTIC)) {
+            try (org.telltale.text.CorpusReader reader = org.telltale.text.Corpora.open(corpus)) {
+                models.add(org.telltale.model.ModelTraining.train(reader, corpus,
+                        org.telltale.model.TrainingRequest.defaults(algorithm)).model());
             }
         }
-        return String.format(Locale.ROOT, "  %s fixed %.0f calls %.3f, auto %.0f calls (%.0f %%) %.3f", name, mean[0],
-                mean[1], mean[2], 100 * mean[2] / mean[0], mean[3]);
+        List<Document> docs = new ArrayList<>();
+        try (org.telltale.text.CorpusReader reader = org.telltale.text.Corpora.open(corpus)) {
+            while (reader.hasNext() && docs.size() < documents) {
+                docs.add(reader.next());
+            }
+        }
+        budget("demo corpus " + corpus, models, List.of("naive-bayes", "logistic"), docs, variants);
     }
 
     static void naiveBayes(String variants) throws IOException {
