@@ -22,8 +22,35 @@ import org.apache.commons.math3.linear.RealMatrix;
 public final class LarsPath {
     private static final double TINY = 1e-12;
 
-    /** One knot: the largest absolute correlation there and the coefficients of every column. */
+    /**
+     * One knot: the largest absolute correlation there and the coefficients of every column (copied
+     * in and out: a knot is made once per step of the path, beside an O(N·d) step).
+     */
     public record Knot(double correlation, double[] coefficients) {
+        public Knot {
+            coefficients = coefficients.clone();
+        }
+
+        @Override
+        public double[] coefficients() {
+            return coefficients.clone();
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Knot k && Double.compare(correlation, k.correlation) == 0
+                    && Arrays.equals(coefficients, k.coefficients);
+        }
+
+        @Override
+        public int hashCode() {
+            return 31 * Double.hashCode(correlation) + Arrays.hashCode(coefficients);
+        }
+
+        @Override
+        public String toString() {
+            return "Knot[correlation=" + correlation + ", coefficients=" + Arrays.toString(coefficients) + "]";
+        }
     }
 
     /** The knots from the all-zero start, and the order in which variables entered. */

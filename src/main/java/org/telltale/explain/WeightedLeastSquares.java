@@ -1,5 +1,6 @@
 package org.telltale.explain;
 
+import java.util.Arrays;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.QRDecomposition;
@@ -17,8 +18,33 @@ public final class WeightedLeastSquares {
     private WeightedLeastSquares() {
     }
 
-    /** Intercept (0 when not fitted) and slopes. */
+    /** Intercept (0 when not fitted) and slopes (copied in and out: one solution per QR fit, beside its O(n·p²)). */
     public record Solution(double intercept, double[] coefficients) {
+        public Solution {
+            coefficients = coefficients.clone();
+        }
+
+        @Override
+        public double[] coefficients() {
+            return coefficients.clone();
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Solution s && Double.compare(intercept, s.intercept) == 0
+                    && Arrays.equals(coefficients, s.coefficients);
+        }
+
+        @Override
+        public int hashCode() {
+            return 31 * Double.hashCode(intercept) + Arrays.hashCode(coefficients);
+        }
+
+        @Override
+        public String toString() {
+            return "Solution[intercept=" + intercept + ", coefficients=" + Arrays.toString(coefficients) + "]";
+        }
+
         /** The fitted value at {@code row}. */
         public double predict(double[] row) {
             double s = intercept;

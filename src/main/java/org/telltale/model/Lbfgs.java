@@ -1,8 +1,10 @@
 package org.telltale.model;
 
 import java.util.ArrayDeque;
+import java.util.Arrays;
 import java.util.Deque;
 import java.util.Iterator;
+import java.util.Objects;
 
 /**
  * Limited-memory BFGS minimisation of a smooth function, after Nocedal and Wright, <i>Numerical
@@ -22,8 +24,31 @@ public final class Lbfgs {
         double evaluate(double[] x, double[] gradient);
     }
 
-    /** The minimiser found and how the search ended. */
+    /** The minimiser found (copied in and out; once per fit) and how the search ended. */
     public record Result(double[] x, OptimiserReport report) {
+        public Result {
+            x = x.clone();
+        }
+
+        @Override
+        public double[] x() {
+            return x.clone();
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Result r && Arrays.equals(x, r.x) && Objects.equals(report, r.report);
+        }
+
+        @Override
+        public int hashCode() {
+            return 31 * Arrays.hashCode(x) + Objects.hashCode(report);
+        }
+
+        @Override
+        public String toString() {
+            return "Result[x=" + Arrays.toString(x) + ", report=" + report + "]";
+        }
     }
 
     /** Sufficient decrease constant c1 and curvature constant c2, the values N&W recommend for quasi-Newton methods. */

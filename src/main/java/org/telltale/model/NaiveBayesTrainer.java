@@ -24,7 +24,7 @@ public final class NaiveBayesTrainer {
         double[][] termCounts = new double[k][v];
         double[] tokens = new double[k];
         for (int i = 0; i < data.size(); i++) {
-            int c = data.labelOf()[i];
+            int c = data.labelOf(i);
             docs[c]++;
             SparseCounts row = data.rows().get(i);
             for (int j = 0; j < row.nonZeros(); j++) {

@@ -1,10 +1,12 @@
 package org.telltale.model;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Set;
 import java.util.TreeSet;
 
@@ -15,15 +17,45 @@ import java.util.TreeSet;
  * @param labels     sorted label names
  * @param vocabulary every feature seen in the rows, sorted
  * @param rows       raw counts per document
- * @param labelOf    for each row, its label's index in {@code labels}
+ * @param labelOf    for each row, its label's index in {@code labels} (copied in and out; read one
+ *                   row's with {@link #labelOf(int)})
  */
 public record TrainingSet(List<String> labels, Vocabulary vocabulary, List<SparseCounts> rows, int[] labelOf) {
     public TrainingSet {
         labels = List.copyOf(labels);
         rows = List.copyOf(rows);
+        labelOf = labelOf.clone();
         if (rows.size() != labelOf.length) {
             throw new IllegalArgumentException(rows.size() + " rows but " + labelOf.length + " labels");
         }
+    }
+
+    /** A copy of every row's label index. */
+    @Override
+    public int[] labelOf() {
+        return labelOf.clone();
+    }
+
+    /** The label index of row {@code i}. */
+    public int labelOf(int i) {
+        return labelOf[i];
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof TrainingSet t && labels.equals(t.labels) && vocabulary.terms().equals(t.vocabulary.terms())
+                && rows.equals(t.rows) && Arrays.equals(labelOf, t.labelOf);
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(labels, vocabulary.terms(), rows, Arrays.hashCode(labelOf));
+    }
+
+    @Override
+    public String toString() {
+        return "TrainingSet[labels=" + labels + ", vocabulary=" + vocabulary.size() + " terms, rows=" + rows.size()
+                + ", labelOf=" + Arrays.toString(labelOf) + "]";
     }
 
     /**
