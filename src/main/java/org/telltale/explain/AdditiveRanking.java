@@ -76,8 +76,8 @@ final class AdditiveRanking {
                 || design.rows() < PROBES_PER_UNIT * design.d) {
             return null;
         }
-        FullFit fit = fit(design);
-        if (fit == null || !(fit.r2() >= 1 - UNEXPLAINED)) {
+        FullFit fit = fit(design, 1 - UNEXPLAINED);
+        if (fit == null) {
             return null;
         }
         int[] units = top(fit.weights(), fit.se(), places, z, firstPosition);
@@ -152,6 +152,14 @@ final class AdditiveRanking {
      * keeping weights are the negated removal weights. Null when the Gram matrix is singular.
      */
     static FullFit fit(SurrogateFit.Design design) {
+        return fit(design, Double.NEGATIVE_INFINITY);
+    }
+
+    /**
+     * As {@link #fit(SurrogateFit.Design)}, or null as soon as its R² falls below {@code leastR2}:
+     * the sandwich, a d³ step beside the solve's d³/3, is then not formed.
+     */
+    static FullFit fit(SurrogateFit.Design design, double leastR2) {
         int n = design.rows();
         int d = design.d;
         double[] w = design.w;
@@ -214,6 +222,9 @@ final class AdditiveRanking {
             s[i] = w[i] * w[i] * e * e;
         }
         double r2 = ssTot <= 1e-300 ? 1.0 : 1.0 - ssRes / ssTot;
+        if (!(r2 >= leastR2)) {
+            return null;
+        }
         double sTotal = 0;
         for (double v : s) {
             sTotal += v;
