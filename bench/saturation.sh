@@ -7,6 +7,8 @@
 # after its first 2 s, and the 429s; then the same for a plain reference client (bench/fixed_client.py)
 # with as many keep-alive threads as the service has slots, and with twice as many.
 # Usage: bench/saturation.sh [JAR] [extra model options…]   (default target/telltale.jar; run on an idle machine)
+# JAVA_OPTS is passed to the JVM: JAVA_OPTS=-Dtelltale.turnaround=true also prints where each
+# request's time went (connect/TurnaroundTrace).
 set -euo pipefail
 cd "$(dirname "$0")/.."
 JAR=${1:-target/telltale.jar}
@@ -39,13 +41,13 @@ print("%3s ms / %2s slots %-6s %-10s: %4d served, window %.2f s, utilization %5.
       "429s %d (%.1f %% of requests after 2 s)" % (sys.argv[2], sys.argv[3], sys.argv[4], sys.argv[5], s["served"], s["window_s"],
       100 * s["utilization"], s["max_held_settled"], s["max_held_second_half"], s["max_held"], s["rejected"], 100 * s["rejected_share_settled"]))
 EOF2
-  grep -i "in flight" "$WORK/err" | tail -1 || true
+  grep -iE "^model: requests in flight|^turnaround" "$WORK/err" || true
 }
 
 run() { # latency_ms slots mode, then extra model options
   local lat=$1 slots=$2 mode=$3
   shift 3
-  measure telltale "$lat" "$slots" "$mode" java -jar "$JAR" explain --model @URL --corpus corpora-demo/support-leaky.jsonl \
+  measure telltale "$lat" "$slots" "$mode" java ${JAVA_OPTS:-} -jar "$JAR" explain --model @URL --corpus corpora-demo/support-leaky.jsonl \
     --first 1 --probes 20000 --batch 64 --json "$WORK/out.json" --verbose "$@"
   # What a plain client with a fixed number of keep-alive threads reaches against the same service:
   # 300 batches of 64 probes of the same document, every body encoded before the first request.

@@ -45,6 +45,7 @@ final class ChunkedClassifier implements TextClassifier {
     private final String description;
     private final ThreadPoolExecutor pool;
     private final AtomicLong retries = new AtomicLong();
+    private final TurnaroundTrace trace;
 
     ChunkedClassifier(BatchScorer scorer, ConnectorSettings settings, Redactor redactor, String description) {
         this(scorer, settings, settings.gatePolicy(), redactor, description);
@@ -54,7 +55,8 @@ final class ChunkedClassifier implements TextClassifier {
             String description) {
         this.scorer = scorer;
         this.batch = settings.batch();
-        this.gate = new InFlightGate(policy);
+        this.trace = TurnaroundTrace.ON ? new TurnaroundTrace() : null;
+        this.gate = new InFlightGate(policy, trace);
         this.unit = settings.kind() == ConnectorSettings.Kind.SUBPROCESS ? "processes" : "requests";
         this.retryPolicy = new RetryPolicy(settings.retries(), settings.backoff());
         this.validator = new ResponseValidator(settings.scores());
@@ -101,11 +103,14 @@ final class ChunkedClassifier implements TextClassifier {
     }
 
     private double[][] scoreWithRetries(List<String> chunk, ResponseValidator.BatchPlace place, double[][] logits) {
+        long started = trace == null ? 0 : System.nanoTime();
         reserve();
+        long reservedAt = trace == null ? 0 : System.nanoTime();
         boolean reserved = true;
         InFlightGate.Ticket kept = null;
         try {
             BatchScorer.Exchange exchange = scorer.prepare(chunk);
+            long encodedAt = trace == null ? 0 : System.nanoTime();
             for (int attempt = 0; ; attempt++) {
                 if (Thread.currentThread().isInterrupted()) {
                     throw new CancellationException();
@@ -147,6 +152,7 @@ final class ChunkedClassifier implements TextClassifier {
                     gate.failed(ticket, TransientFailure.Overload.NONE);
                     throw e;
                 }
+                long answeredAt = trace == null ? 0 : System.nanoTime();
                 gate.answered(ticket, chunk.size(), reply.measured());
                 RawScores raw;
                 try {
@@ -154,7 +160,20 @@ final class ChunkedClassifier implements TextClassifier {
                 } catch (MalformedResponse bad) {
                     throw new ClassifierException(redactor.redact(place.name() + ": " + bad.getMessage()));
                 }
-                return validator.validate(raw, chunk.size(), place, logits);
+                if (trace == null) {
+                    return validator.validate(raw, chunk.size(), place, logits);
+                }
+                long decodedAt = System.nanoTime();
+                double[][] valid = validator.validate(raw, chunk.size(), place, logits);
+                if (attempt == 0) {
+                    long firstByte = TurnaroundTrace.firstByteSince(ticket.sentAt(), ticket.sentAt());
+                    if (TurnaroundTrace.tookFreedPlace()) {
+                        trace.setupAfterFreed(firstByte - ticket.sentAt());
+                    }
+                    trace.request(started, reservedAt, encodedAt, ticket.sentAt(), firstByte, answeredAt, decodedAt,
+                            System.nanoTime());
+                }
+                return valid;
             }
         } finally {
             if (kept != null) {
@@ -259,6 +278,9 @@ final class ChunkedClassifier implements TextClassifier {
 
     @Override
     public void close() {
+        if (trace != null) {
+            trace.print(System.err);
+        }
         pool.shutdownNow();
         scorer.close();
     }

@@ -75,6 +75,7 @@ final class HttpConnection implements AutoCloseable {
         deadline.until(deadlineNanos);
         exchanges++;
         try {
+            TurnaroundTrace.firstByte();
             out.write(request);
             out.flush();
         } catch (IOException e) {

@@ -87,9 +87,17 @@ final class InFlightGate {
     private long delivered;
     private long lastEvent = System.nanoTime();
 
+    private final TurnaroundTrace trace;
+
     InFlightGate(Policy policy) {
+        this(policy, null);
+    }
+
+    /** With a {@code trace} (may be null) that records how freed places are taken. */
+    InFlightGate(Policy policy, TurnaroundTrace trace) {
         this.policy = policy;
         this.nanosAtLimit = new long[policy.max() + 1];
+        this.trace = trace;
     }
 
     /** Waits until fewer than the limit plus {@link #PREPARED_AHEAD} are prepared or in flight, then counts one prepared. */
@@ -124,8 +132,10 @@ final class InFlightGate {
         lock.lockInterruptibly();
         try {
             waiting++;
+            boolean waited = false;
             try {
                 while (inFlight >= policy.limit()) {
+                    waited = true;
                     freed.await(1, TimeUnit.SECONDS);
                 }
             } finally {
@@ -137,7 +147,11 @@ final class InFlightGate {
             }
             inFlight++;
             peak = Math.max(peak, inFlight);
-            return new Ticket(System.nanoTime(), inFlight, delivered);
+            long now = System.nanoTime();
+            if (trace != null) {
+                TurnaroundTrace.tookFreedPlace(trace.admitted(now, inFlight, policy.limit() - inFlight + 1, waited) >= 0);
+            }
+            return new Ticket(now, inFlight, delivered);
         } finally {
             lock.unlock();
         }
@@ -154,7 +168,13 @@ final class InFlightGate {
                 policy.answered(now, new Answer(t.sentAt(), now - t.sentAt(), size, t.inFlight(), inFlight,
                         (int) Math.min(Integer.MAX_VALUE, delivered - t.delivered()), waiting > 0));
             }
+            if (trace != null) {
+                trace.answer(now, now - t.sentAt(), policy.limit(), inFlight);
+            }
             inFlight--;
+            if (trace != null && inFlight < policy.limit()) {
+                trace.freed(now);
+            }
             freed.signalAll();
         } finally {
             lock.unlock();
