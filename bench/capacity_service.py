@@ -69,6 +69,17 @@ class Handler(BaseHTTPRequestHandler):
             if settled(now):
                 state["requests_settled"] += 1
                 state["max_held_settled"] = max(state["max_held_settled"], state["held"])
+        held = [True]
+
+        def answered():
+            # A request is no longer held once its answer is about to be written: the client can
+            # read it and send the next one before this thread runs again (one interpreter lock),
+            # which counted one request too many at the service.
+            if held[0]:
+                held[0] = False
+                with lock:
+                    state["held"] -= 1
+
         try:
             if MODE == "reject":
                 got = slots.acquire(blocking=False)
@@ -77,6 +88,7 @@ class Handler(BaseHTTPRequestHandler):
                         state["rejected"] += 1
                         if settled(now):
                             state["rejected_settled"] += 1
+                    answered()
                     self.send_json(429, {"error": "over capacity"}, [("Retry-After", RETRY_AFTER)])
                     return
             else:
@@ -90,10 +102,10 @@ class Handler(BaseHTTPRequestHandler):
                 state["last_end"] = max(state["last_end"], end)
                 state["served"] += 1
                 state["texts"] += len(texts)
+            answered()
             self.send_json(200, {"labels": ["a", "b"], "scores": [[0.5, 0.5]] * len(texts)})
         finally:
-            with lock:
-                state["held"] -= 1
+            answered()
 
     def log_message(self, *args):
         pass

@@ -32,8 +32,8 @@ import java.util.Arrays;
  *       smallest latency leaves out) is covered. BBR keeps twice the pipe; one and a half keeps
  *       the wait shorter. Once per round in which the demand filled the limit, the limit moves
  *       toward that target by at most an eighth (at least one).</li>
- *   <li><b>Overload</b>: a 429 or 503 marks the in-flight count it was sent at as over capacity: the
- *       limit stays below it for {@link #CEILING_HOLD_NANOS} before probing one higher per round; a
+ *   <li><b>Overload</b>: a 429 or 503 marks the most in flight while it was out (at its sending or
+ *       its refusal) as over capacity: the limit stays below it for {@link #CEILING_HOLD_NANOS} before probing one higher per round; a
  *       timeout halves it (TCP's multiplicative decrease), held likewise. One cut per round trip, as
  *       TCP cuts once per window: only requests sent after the last cut can cut again.</li>
  * </ul>

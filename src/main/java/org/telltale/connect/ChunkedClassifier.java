@@ -30,7 +30,7 @@ import org.telltale.model.TextClassifier;
  * <p>Each batch runs on a worker that reserves a place among the prepared requests, encodes its
  * batch, then asks the gate for a place in flight, so a prepared request is waiting whenever a
  * place frees; it decodes and validates the answer after giving its place back. The gate keeps at
- * most {@link InFlightGate#PREPARED_AHEAD} requests prepared beyond its limit, which bounds the
+ * most {@link InFlightGate#ahead} requests prepared beyond its limit (four, or half the limit), which bounds the
  * bodies held in memory and the encoding done ahead of need.
  */
 final class ChunkedClassifier implements TextClassifier {
@@ -62,7 +62,7 @@ final class ChunkedClassifier implements TextClassifier {
         this.validator = new ResponseValidator(settings.scores());
         this.redactor = redactor;
         this.description = redactor.redact(description);
-        int workers = policy.max() + InFlightGate.PREPARED_AHEAD;
+        int workers = policy.max() + InFlightGate.ahead(policy.max());
         this.pool = new ThreadPoolExecutor(workers, workers, 30, TimeUnit.SECONDS, new LinkedBlockingQueue<>(), daemonThreads());
         this.pool.allowCoreThreadTimeOut(true);
     }

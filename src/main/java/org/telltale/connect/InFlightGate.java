@@ -11,7 +11,7 @@ import java.util.concurrent.locks.ReentrantLock;
  * flight, for the level a run settled at. Thread-safe.
  *
  * <p>Before a request is encoded it {@linkplain #reserve reserves} a place among the prepared
- * ones: at most {@link #PREPARED_AHEAD} more than the limit are prepared or in flight. So a few
+ * ones: at most {@link #ahead} more than the limit are prepared or in flight. So a few
  * bodies are always ready when a place frees, and a call of many batches does not encode them
  * all at once (which, at the start of a run, took the CPU from the first requests' answers).
  */
@@ -28,7 +28,10 @@ final class InFlightGate {
         default void answered(long now, Answer answer) {
         }
 
-        /** A request was refused (429, 503) or timed out. */
+        /**
+         * A request was refused (429, 503) or timed out; {@code inFlightAtSend} is the most in flight
+         * at its sending or at its failure, itself included.
+         */
         default void overloaded(long now, long sentAt, int inFlightAtSend, boolean timedOut) {
         }
     }
@@ -74,15 +77,29 @@ final class InFlightGate {
     }
 
     private final ReentrantLock lock = new ReentrantLock(true);
-    private final Condition freed = lock.newCondition();
+    /** Requests with a body ready, waiting for a place in flight. */
+    private final Condition placeFree = lock.newCondition();
+    /** Workers waiting for a place among the prepared before they encode. */
+    private final Condition prepareFree = lock.newCondition();
     private final Policy policy;
     private final long[] nanosAtLimit;
     /** Requests encoded, or being encoded, beyond those in flight: ready when a place frees. */
     static final int PREPARED_AHEAD = 4;
 
+    /**
+     * How many requests may be prepared beyond a limit: {@link #PREPARED_AHEAD}, or half the limit
+     * when that is more. While the limit doubles per round trip every answer opens two places, and
+     * with only four bodies ahead half the freed places of a 16-slot service waited for an encode
+     * (docs/performance.md).
+     */
+    static int ahead(int limit) {
+        return Math.max(PREPARED_AHEAD, limit / 2);
+    }
+
     private int inFlight;
     private int prepared;
     private int waiting;
+    private int reserving;
     private int peak;
     private long delivered;
     private long lastEvent = System.nanoTime();
@@ -100,12 +117,17 @@ final class InFlightGate {
         this.trace = trace;
     }
 
-    /** Waits until fewer than the limit plus {@link #PREPARED_AHEAD} are prepared or in flight, then counts one prepared. */
+    /** Waits until fewer than the limit plus {@link #ahead} of it are prepared or in flight, then counts one prepared. */
     void reserve() throws InterruptedException {
         lock.lockInterruptibly();
         try {
-            while (inFlight + prepared >= policy.limit() + PREPARED_AHEAD) {
-                freed.await(1, TimeUnit.SECONDS);
+            reserving++;
+            try {
+                while (inFlight + prepared >= policy.limit() + ahead(policy.limit())) {
+                    prepareFree.await(1, TimeUnit.SECONDS);
+                }
+            } finally {
+                reserving--;
             }
             prepared++;
         } finally {
@@ -118,7 +140,7 @@ final class InFlightGate {
         lock.lock();
         try {
             prepared--;
-            freed.signalAll();
+            wake();
         } finally {
             lock.unlock();
         }
@@ -136,7 +158,7 @@ final class InFlightGate {
             try {
                 while (inFlight >= policy.limit()) {
                     waited = true;
-                    freed.await(1, TimeUnit.SECONDS);
+                    placeFree.await(1, TimeUnit.SECONDS);
                 }
             } finally {
                 waiting--;
@@ -175,7 +197,7 @@ final class InFlightGate {
             if (trace != null && inFlight < policy.limit()) {
                 trace.freed(now);
             }
-            freed.signalAll();
+            wake();
         } finally {
             lock.unlock();
         }
@@ -196,13 +218,18 @@ final class InFlightGate {
         try {
             long now = System.nanoTime();
             account();
+            // The service was full at some moment between sending and refusal: the most in flight over
+            // that time bounds what it held, the count at sending alone does not (a request on a new
+            // connection can wait in the server's accept queue while later ones overtake it, and a
+            // refusal of the request sent second once set the limit to one).
+            int most = Math.max(t.inFlight(), inFlight);
             if (!keepPlace) {
                 inFlight--;
             }
             if (overload != TransientFailure.Overload.NONE) {
-                policy.overloaded(now, t.sentAt(), t.inFlight(), overload == TransientFailure.Overload.TIMED_OUT);
+                policy.overloaded(now, t.sentAt(), most, overload == TransientFailure.Overload.TIMED_OUT);
             }
-            freed.signalAll();
+            wake();
         } finally {
             lock.unlock();
         }
@@ -224,9 +251,26 @@ final class InFlightGate {
         try {
             account();
             inFlight--;
-            freed.signalAll();
+            wake();
         } finally {
             lock.unlock();
+        }
+    }
+
+    /**
+     * Wakes as many waiters as there are places for them, longest waiting first, instead of all of
+     * them: with dozens of workers waiting, waking all made each freed place wait for the whole
+     * crowd to pass the (fair) lock before the one that could go went (a mean 1-2 ms per hand-off,
+     * docs/performance.md). Called under the lock after every change of the counts or the limit.
+     */
+    private void wake() {
+        int places = Math.min(waiting, policy.limit() - inFlight);
+        for (int i = 0; i < places; i++) {
+            placeFree.signal();
+        }
+        int bodies = Math.min(reserving, policy.limit() + ahead(policy.limit()) - inFlight - prepared);
+        for (int i = 0; i < bodies; i++) {
+            prepareFree.signal();
         }
     }
 
