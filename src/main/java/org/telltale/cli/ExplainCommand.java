@@ -111,8 +111,9 @@ final class ExplainCommand implements Callable<Integer> {
         boolean color = !noColor && !jsonOnStdout && System.console() != null && System.getenv("NO_COLOR") == null
                 && !"dumb".equals(System.getenv("TERM"));
         List<Explanation> explanations = new ArrayList<>();
-        try (TextClassifier classifier = model.open()) {
-            Explainer explainer = new Explainer(classifier, settings);
+        ModelOptions.ForExplaining opened = model.openForExplaining();
+        try (TextClassifier classifier = opened.classifier()) {
+            Explainer explainer = new Explainer(classifier, settings, opened.probeScoring());
             for (Document doc : documents) {
                 if (documents.size() > 1) {
                     err.printf(Locale.ROOT, "explaining %s (%d of %d)%n", doc.id(), explanations.size() + 1, documents.size());

@@ -10,6 +10,9 @@ import org.telltale.connect.Connectors;
 import org.telltale.connect.Durations;
 import org.telltale.connect.Protocol;
 import org.telltale.connect.ScoreKind;
+import org.telltale.model.BuiltinModel;
+import org.telltale.model.ModelFile;
+import org.telltale.model.ProbeScoring;
 import org.telltale.model.TextClassifier;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.Option;
@@ -83,6 +86,24 @@ public final class ModelOptions {
     /** Opens the connector; the caller closes it. */
     public TextClassifier open() {
         return Connectors.open(settings());
+    }
+
+    /**
+     * A connector and, when {@code --model} is a built-in model file, the model itself, which
+     * scores an explanation's probes without their texts where that is exact (null otherwise).
+     * Closing the connector closes the model.
+     */
+    record ForExplaining(TextClassifier classifier, ProbeScoring probeScoring) {
+    }
+
+    /** Opens the connector as {@link #open()} does, keeping a built-in model's probe scoring; the caller closes the classifier. */
+    ForExplaining openForExplaining() {
+        ConnectorSettings settings = settings();
+        if (settings.kind() == ConnectorSettings.Kind.FILE && !settings.spec().contains("://")) {
+            BuiltinModel builtin = ModelFile.load(java.nio.file.Path.of(settings.spec()));
+            return new ForExplaining(Connectors.inProcess(builtin, settings), builtin);
+        }
+        return new ForExplaining(Connectors.open(settings), null);
     }
 
     /** Under {@code --verbose}, prints on stderr how many requests the connector kept in flight (for auto, where it settled). */

@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.Objects;
 import org.apache.lucene.analysis.Analyzer;
 import org.telltale.TelltaleException;
+import org.telltale.model.ProbeScoring;
 import org.telltale.model.TextClassifier;
 import org.telltale.text.Analyzers;
 import org.telltale.text.Document;
@@ -32,13 +33,24 @@ public final class Explainer {
     static final int MAX_EXACT_UNITS = 20;
 
     private final TextClassifier classifier;
+    private final ProbeScoring probeScoring;
     private final ExplainSettings settings;
     private final Analyzer analyzer;
     private final Masker masker;
     private final SurrogateFit fitter;
 
     public Explainer(TextClassifier classifier, ExplainSettings settings) {
+        this(classifier, settings, classifier instanceof ProbeScoring scoring ? scoring : null);
+    }
+
+    /**
+     * @param probeScoring scores masks without their texts where the model shows that exact for a
+     *                     document (a built-in model in this process; see {@link ProbeScoring}), or
+     *                     {@code null}: every probe goes to {@code classifier} as a text
+     */
+    public Explainer(TextClassifier classifier, ExplainSettings settings, ProbeScoring probeScoring) {
         this.classifier = Objects.requireNonNull(classifier, "classifier");
+        this.probeScoring = probeScoring;
         this.settings = Objects.requireNonNull(settings, "settings");
         this.analyzer = Analyzers.byName(settings.analyzer());
         this.masker = new Masker(settings.filler());
@@ -64,7 +76,7 @@ public final class Explainer {
         }
         ProbeRandom random = ProbeRandom.forDocument(settings.seed(), doc.id());
         ProbeRandom sampling = random.split();
-        ProbeSet probes = new ProbeSet(doc.id(), index, masker, classifier);
+        ProbeSet probes = new ProbeSet(doc.id(), index, masker, classifier, worthPreparing(index) ? probeScoring : null);
         boolean shapley = settings.weighting() == Weighting.SHAPLEY;
         boolean exact = d <= MAX_EXACT_UNITS && (1L << d) <= settings.budget();
         double[] counts = settings.sampling() == Sampling.KERNEL && d > 0
@@ -192,6 +204,18 @@ public final class Explainer {
         }
         return out;
     }
+
+    /**
+     * Whether to ask the model to score this document's masks itself: when it offers to and
+     * preparing (an analysis per unit and a few checks) costs fewer analyses than the probes.
+     */
+    private boolean worthPreparing(TermIndex index) {
+        int d = index.size();
+        return probeScoring != null && d > 0 && d + PREPARATION_CHECKS < settings.budget();
+    }
+
+    /** An upper bound of the analyses beyond one per unit that a model spends preparing its mask scorer. */
+    static final int PREPARATION_CHECKS = 16;
 
     /** Effects below these are negligible for the stopping rule: half a percentage point, 0.05 in log-odds. */
     static final double PROBABILITY_RESOLUTION = 0.005;

@@ -6,6 +6,8 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.telltale.model.ClassifierException;
+import org.telltale.model.MaskScorer;
+import org.telltale.model.ProbeScoring;
 import org.telltale.model.ScoreMatrix;
 import org.telltale.model.TextClassifier;
 import org.telltale.text.Masker;
@@ -31,6 +33,7 @@ final class ProbeSet {
     private final TermIndex index;
     private final Masker masker;
     private final TextClassifier classifier;
+    private final MaskScorer masks;
     private final List<BitSet> rows = new ArrayList<>();
     private final List<Integer> rowScores = new ArrayList<>();
     private final Map<BitSet, Integer> byMask = new HashMap<>();
@@ -43,10 +46,26 @@ final class ProbeSet {
     private final long maxCharsPerCall;
 
     ProbeSet(String documentId, TermIndex index, Masker masker, TextClassifier classifier) {
-        this(documentId, index, masker, classifier, MAX_CHARS_PER_CALL);
+        this(documentId, index, masker, classifier, null, MAX_CHARS_PER_CALL);
+    }
+
+    /**
+     * @param scoring the model's own scoring of masks, asked to prepare for this document (the
+     *                time counts as the model's), or {@code null} to send every probe's text
+     */
+    ProbeSet(String documentId, TermIndex index, Masker masker, TextClassifier classifier, ProbeScoring scoring) {
+        this(documentId, index, masker, classifier, scoring, MAX_CHARS_PER_CALL);
     }
 
     ProbeSet(String documentId, TermIndex index, Masker masker, TextClassifier classifier, long maxCharsPerCall) {
+        this(documentId, index, masker, classifier, null, maxCharsPerCall);
+    }
+
+    private ProbeSet(String documentId, TermIndex index, Masker masker, TextClassifier classifier,
+            ProbeScoring scoring, long maxCharsPerCall) {
+        long start = System.nanoTime();
+        this.masks = scoring == null ? null : scoring.prepare(index, masker);
+        this.modelNanos = scoring == null ? 0 : System.nanoTime() - start;
         this.maxCharsPerCall = maxCharsPerCall;
         this.documentId = documentId;
         this.index = index;
@@ -70,6 +89,18 @@ final class ProbeSet {
         if (fresh.isEmpty()) {
             return;
         }
+        if (masks != null) {
+            long start = System.nanoTime();
+            ScoreMatrix answer = masks.score(fresh);
+            modelNanos += System.nanoTime() - start;
+            int[] slot = new int[fresh.size()];
+            for (int k = 0; k < slot.length; k++) {
+                slot[k] = scores.size() + k;
+            }
+            keep(answer, slot.length);
+            resolve(slot);
+            return;
+        }
         int[] slot = new int[fresh.size()];
         int perCall = (int) Math.max(1, Math.min(fresh.size(), maxCharsPerCall / Math.max(1, index.text().length())));
         for (int from = 0; from < fresh.size(); from += perCall) {
@@ -88,25 +119,35 @@ final class ProbeSet {
             long start = System.nanoTime();
             ScoreMatrix answer = classifier.score(texts);
             modelNanos += System.nanoTime() - start;
-            if (answer.size() != texts.size()) {
-                throw new ClassifierException("document " + documentId + ": the model answered " + answer.size()
-                        + " rows for " + texts.size() + " texts");
-            }
-            if (labels == null) {
-                labels = answer.labels();
-            } else if (!labels.equals(answer.labels())) {
-                throw new ClassifierException("document " + documentId + ": the model changed its labels from "
-                        + labels + " to " + answer.labels());
-            }
-            // One copy of the answer's rows per batch (a ScoreMatrix hands out copies), kept as they are.
-            double[][] rows = answer.rows();
-            double[][] answerLogits = answer.logits();
-            withLogits &= answer.hasLogits();
-            for (int i = 0; i < texts.size(); i++) {
-                scores.add(rows[i]);
-                logits.add(answerLogits == null ? null : answerLogits[i]);
-            }
+            keep(answer, texts.size());
         }
+        resolve(slot);
+    }
+
+    /** Checks one answer and keeps its rows after the ones already scored. */
+    private void keep(ScoreMatrix answer, int sent) {
+        if (answer.size() != sent) {
+            throw new ClassifierException("document " + documentId + ": the model answered " + answer.size()
+                    + " rows for " + sent + " texts");
+        }
+        if (labels == null) {
+            labels = answer.labels();
+        } else if (!labels.equals(answer.labels())) {
+            throw new ClassifierException("document " + documentId + ": the model changed its labels from "
+                    + labels + " to " + answer.labels());
+        }
+        // One copy of the answer's rows per batch (a ScoreMatrix hands out copies), kept as they are.
+        double[][] rows = answer.rows();
+        double[][] answerLogits = answer.logits();
+        withLogits &= answer.hasLogits();
+        for (int i = 0; i < sent; i++) {
+            scores.add(rows[i]);
+            logits.add(answerLogits == null ? null : answerLogits[i]);
+        }
+    }
+
+    /** Points the provisional rows of this round at their scores. */
+    private void resolve(int[] slot) {
         for (int i = 0; i < rowScores.size(); i++) {
             int v = rowScores.get(i);
             if (v < 0) {
@@ -120,7 +161,7 @@ final class ProbeSet {
         return rows.size();
     }
 
-    /** Distinct texts sent to the model so far. */
+    /** Distinct texts sent to the model so far (distinct masks, when they are scored without texts). */
     int calls() {
         return scores.size();
     }

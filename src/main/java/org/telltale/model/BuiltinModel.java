@@ -2,6 +2,8 @@ package org.telltale.model;
 
 import java.util.List;
 import java.util.Objects;
+import org.telltale.text.Masker;
+import org.telltale.text.TermIndex;
 
 /**
  * A classifier Telltale trains and runs in-process: naive Bayes or logistic regression over the
@@ -12,7 +14,7 @@ import java.util.Objects;
  * <p>Load and save with {@link ModelFile}. Immutable and thread-safe; {@link #close()} releases
  * the analyzer.
  */
-public abstract sealed class BuiltinModel implements TextClassifier permits NaiveBayesModel, LogisticModel {
+public abstract sealed class BuiltinModel implements TextClassifier, ProbeScoring permits NaiveBayesModel, LogisticModel {
     private final List<String> labels;
     private final TermCounter counter;
     private final Vocabulary vocabulary;
@@ -90,6 +92,15 @@ public abstract sealed class BuiltinModel implements TextClassifier permits Naiv
         return new ScoreMatrix(labels, rows, logits);
     }
 
+    /**
+     * Scores the masks of {@code index} from term counts instead of texts, when that is exact for
+     * this document (see {@link MaskedCounts}); {@code null} otherwise.
+     */
+    @Override
+    public MaskScorer prepare(TermIndex index, Masker masker) {
+        return MaskedCounts.prepare(this, index, masker);
+    }
+
     @Override
     public String describe() {
         return "built-in " + algorithm().key() + " model" + (source == null ? "" : " " + source)
@@ -107,5 +118,14 @@ public abstract sealed class BuiltinModel implements TextClassifier permits Naiv
     }
 
     /** Scores of each label from raw counts of the known features. */
-    abstract double[] linearScores(SparseCounts counts);
+    final double[] linearScores(SparseCounts counts) {
+        return linearScores(counts.columns(), counts.values(), counts.nonZeros());
+    }
+
+    /**
+     * Scores of each label from the first {@code n} known columns (ascending) and their raw
+     * counts: the one place a built-in model's arithmetic lives, so that a text and the counts of
+     * a mask are scored alike to the last bit.
+     */
+    abstract double[] linearScores(int[] columns, double[] counts, int n);
 }

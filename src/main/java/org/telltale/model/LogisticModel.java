@@ -74,18 +74,16 @@ public final class LogisticModel extends BuiltinModel {
     }
 
     @Override
-    double[] linearScores(SparseCounts counts) {
-        int[] cols = counts.columns();
-        double[] n = counts.values();
-        double[] x = new double[n.length];
-        for (int k = 0; k < n.length; k++) {
+    double[] linearScores(int[] cols, double[] n, int nonZeros) {
+        double[] x = new double[nonZeros];
+        for (int k = 0; k < nonZeros; k++) {
             x[k] = Math.log1p(n[k]);
         }
         double[] z = new double[intercepts.length];
         for (int c = 0; c < z.length; c++) {
             double[] w = weights[c];
             double sum = intercepts[c];
-            for (int k = 0; k < cols.length; k++) {
+            for (int k = 0; k < nonZeros; k++) {
                 sum += x[k] * w[cols[k]];
             }
             z[c] = sum;

@@ -66,14 +66,12 @@ public final class NaiveBayesModel extends BuiltinModel {
     }
 
     @Override
-    double[] linearScores(SparseCounts counts) {
-        int[] cols = counts.columns();
-        double[] n = counts.values();
+    double[] linearScores(int[] cols, double[] n, int nonZeros) {
         double[] s = new double[logPrior.length];
         for (int c = 0; c < s.length; c++) {
             double[] ll = logLikelihood[c];
             double sum = logPrior[c];
-            for (int k = 0; k < cols.length; k++) {
+            for (int k = 0; k < nonZeros; k++) {
                 sum += n[k] * ll[cols[k]];
             }
             s[c] = sum;
