@@ -15,6 +15,7 @@ import org.telltale.ExitCodes;
 import org.telltale.TelltaleException;
 import org.telltale.OptionWords;
 import org.telltale.UsageException;
+import org.telltale.explain.ConcurrentExplanations;
 import org.telltale.explain.ExplainSettings;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
@@ -114,19 +115,32 @@ final class ExplainCommand implements Callable<Integer> {
         ModelOptions.ForExplaining opened = model.openForExplaining();
         try (TextClassifier classifier = opened.classifier()) {
             Explainer explainer = new Explainer(classifier, settings, opened.probeScoring());
-            for (Document doc : documents) {
-                if (documents.size() > 1) {
-                    err.printf(Locale.ROOT, "explaining %s (%d of %d)%n", doc.id(), explanations.size() + 1, documents.size());
+            long start = System.nanoTime();
+            ConcurrentExplanations.explain(explainer, documents, label, ConcurrentExplanations.atOnce(),
+                    (doc, position, of) -> {
+                        if (of > 1) {
+                            synchronized (err) {
+                                err.printf(Locale.ROOT, "explaining %s (%d of %d)%n", doc.id(), position + 1, of);
+                                err.flush();
+                            }
+                        }
+                    },
+                    e -> {
+                        explanations.add(e);
+                        if (!jsonOnStdout) {
+                            out.print(ExplanationTable.render(e, color));
+                            out.println();
+                            out.print(MarkedLine.render(e, color));
+                            out.println();
+                            out.flush();
+                        }
+                    });
+            if (documents.size() > 1) {
+                long probes = explanations.stream().mapToLong(Explanation::probes).sum();
+                synchronized (err) {
+                    err.printf(Locale.ROOT, "explained %d documents (%d probes) in %d ms%n", documents.size(), probes,
+                            (System.nanoTime() - start) / 1_000_000);
                     err.flush();
-                }
-                Explanation e = explainer.explain(doc, label);
-                explanations.add(e);
-                if (!jsonOnStdout) {
-                    out.print(ExplanationTable.render(e, color));
-                    out.println();
-                    out.print(MarkedLine.render(e, color));
-                    out.println();
-                    out.flush();
                 }
             }
             ModelOptions.reportConcurrency(classifier, common.verbose, err);
