@@ -105,7 +105,7 @@ final class BandwidthChoice {
         for (int h = 0; h < 2; h++) {
             SurrogateFit.Design train = weighted[h];
             SurrogateFit.Design test = weighted[1 - h];
-            Surrogate s = fitter.fitUnits(train, fitter.select(train, k));
+            Surrogate s = fitter.pointFit(train, fitter.select(train, k));
             int[] units = s.units();
             double[] weights = s.weights();
             double total = 0;

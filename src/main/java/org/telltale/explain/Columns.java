@@ -19,4 +19,20 @@ public interface Columns {
 
     /** Writes column {@code j} into {@code out} (length {@link #rows()}). */
     void column(int j, double[] out);
+
+    /**
+     * {@code out[j] = Σ_i X[i][j]²} for every column j, each sum taken over the rows in order, as
+     * materialising column j and taking its dot product with itself would.
+     */
+    default void squaredNorms(double[] out) {
+        double[] col = new double[rows()];
+        for (int j = 0; j < columns(); j++) {
+            column(j, col);
+            double s = 0;
+            for (double v : col) {
+                s += v * v;
+            }
+            out[j] = s;
+        }
+    }
 }

@@ -32,10 +32,7 @@ public final class ForwardSelection {
         int steps = Math.min(k, d);
         double[] norm2 = new double[d];
         double[] col = new double[n];
-        for (int j = 0; j < d; j++) {
-            x.column(j, col);
-            norm2[j] = dot(col, col);
-        }
+        x.squaredNorms(norm2);
         double[] xty = new double[d];
         x.transposeTimes(y, xty);
 

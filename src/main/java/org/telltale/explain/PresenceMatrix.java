@@ -102,6 +102,28 @@ public final class PresenceMatrix implements Columns {
         }
     }
 
+    /**
+     * {@code out[j] = Σ_i (scale_i·(X[i][j] − means_j))²} for every column, summed over the rows
+     * in order: the squared norms of the columns {@link WeightedCentered} materialises, to the
+     * same bits, in one pass over the words.
+     */
+    void centredSquaredNorms(double[] scale, double[] means, double[] out) {
+        Arrays.fill(out, 0, units, 0.0);
+        for (int i = 0; i < rows; i++) {
+            double s = scale[i];
+            int row = i * stride;
+            for (int w = 0; w < stride; w++) {
+                long word = bits[row + w];
+                int base = w << 6;
+                int width = Math.min(64, units - base);
+                for (int b = 0; b < width; b++) {
+                    double v = s * ((double) (word >>> b & 1L) - means[base + b]);
+                    out[base + b] += v * v;
+                }
+            }
+        }
+    }
+
     @Override
     public void column(int j, double[] out) {
         int word = j >>> 6;

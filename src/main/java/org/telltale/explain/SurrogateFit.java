@@ -150,7 +150,7 @@ final class SurrogateFit {
     /** The refit on the given units, with intervals; exact designs get zero-width intervals. */
     Surrogate fitUnits(Design design, int[] units) {
         double lambda = design.exact || design.shapley ? 0.0 : settings.ridge();
-        Solved s = design.shapley ? constrained(design, units) : ridge(design, units, lambda);
+        Solved s = design.shapley ? constrained(design, units) : ridge(design, units, lambda, true);
         int p = units.length;
         double[] low = new double[p];
         double[] high = new double[p];
@@ -168,12 +168,35 @@ final class SurrogateFit {
         return new Surrogate(units, s.intercept, s.weights, low, high, se, prediction, s.r2, design.rows());
     }
 
+    /**
+     * The refit's intercept and weights on the given units, as {@link #fitUnits} computes them,
+     * without the second pass over the probes for intervals and R² (those are NaN): what scoring
+     * held-out probes needs ({@link BandwidthChoice}).
+     */
+    Surrogate pointFit(Design design, int[] units) {
+        if (design.shapley) {
+            return fitUnits(design, units);
+        }
+        double lambda = design.exact ? 0.0 : settings.ridge();
+        Solved s = ridge(design, units, lambda, false);
+        double[] none = new double[units.length];
+        java.util.Arrays.fill(none, Double.NaN);
+        double prediction = s.intercept;
+        for (double b : s.weights) {
+            prediction += b;
+        }
+        return new Surrogate(units, s.intercept, s.weights, none, none, none, prediction, Double.NaN, design.rows());
+    }
+
     /** The result of one refit before intervals are formed. */
     private record Solved(double intercept, double[] weights, double[] unpenalised, double[] variance, double r2) {
     }
 
-    /** Weighted ridge on the chosen columns, centred in the weight metric; the intercept is not penalised. */
-    private static Solved ridge(Design design, int[] units, double lambda) {
+    /**
+     * Weighted ridge on the chosen columns, centred in the weight metric; the intercept is not
+     * penalised. Without {@code intervals}, only the intercept and weights are computed.
+     */
+    private static Solved ridge(Design design, int[] units, double lambda, boolean intervals) {
         int n = design.rows();
         int p = units.length;
         PresenceMatrix x = design.x;
@@ -223,13 +246,16 @@ final class SurrogateFit {
             lambda = 1e-9 * Math.max(1, total);
             beta = solveRidge(g, r, p, lambda);
         }
-        double[] unpenalised = lambda > 0 ? solveRidge(g, r, p, 0) : beta;
-        if (unpenalised == null) {
-            unpenalised = beta;
-        }
         double intercept = yMean;
         for (int j = 0; j < p; j++) {
             intercept -= mean[j] * beta[j];
+        }
+        if (!intervals) {
+            return new Solved(intercept, beta, beta, null, Double.NaN);
+        }
+        double[] unpenalised = lambda > 0 ? solveRidge(g, r, p, 0) : beta;
+        if (unpenalised == null) {
+            unpenalised = beta;
         }
         // Second pass: residuals for R² and the meat of the sandwich.
         double[] meat = new double[p * p];

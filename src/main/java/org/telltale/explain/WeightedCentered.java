@@ -96,6 +96,19 @@ public final class WeightedCentered implements Columns {
         }
     }
 
+    /**
+     * Row by row over a bit matrix, every column at once: the same products summed in the same
+     * order as column by column, so the same bits, without materialising a column.
+     */
+    @Override
+    public void squaredNorms(double[] out) {
+        if (!(x instanceof PresenceMatrix bits)) {
+            Columns.super.squaredNorms(out);
+            return;
+        }
+        bits.centredSquaredNorms(sqrtW, means, out);
+    }
+
     @Override
     public void column(int j, double[] out) {
         x.column(j, out);
