@@ -2,11 +2,11 @@ package org.telltale.explain;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.function.Consumer;
+import org.telltale.Futures;
 import org.telltale.text.Document;
 
 /**
@@ -64,28 +64,10 @@ public final class ConcurrentExplanations {
                 }));
             }
             for (Future<Explanation> next : pending) {
-                inOrder.accept(result(next));
+                inOrder.accept(Futures.await(next, "an explanation"));
             }
         } finally {
             pool.shutdownNow();
-        }
-    }
-
-    private static Explanation result(Future<Explanation> future) {
-        try {
-            return future.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while explaining", e);
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException r) {
-                throw r;
-            }
-            if (cause instanceof Error error) {
-                throw error;
-            }
-            throw new IllegalStateException(cause);
         }
     }
 }

@@ -2,10 +2,10 @@ package org.telltale.overlap;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Future;
 import java.util.function.Function;
+import org.telltale.Futures;
 
 /**
  * Feeds items, in batches, to worker threads while the caller keeps reading: at most
@@ -59,24 +59,6 @@ final class BatchRunner<T, R> {
     private void collectOldest() {
         Future<R> oldest = futures.get(results.size());
         futures.set(results.size(), null);
-        results.add(await(oldest));
-    }
-
-    static <R> R await(Future<R> future) {
-        try {
-            return future.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while waiting for a worker", e);
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException re) {
-                throw re;
-            }
-            if (cause instanceof Error err) {
-                throw err;
-            }
-            throw new IllegalStateException(cause);
-        }
+        results.add(Futures.await(oldest, "a worker"));
     }
 }

@@ -5,6 +5,7 @@ import java.util.BitSet;
 import java.util.List;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Future;
+import org.telltale.Futures;
 import org.telltale.TelltaleException;
 import org.telltale.text.Document;
 
@@ -100,7 +101,7 @@ final class VerificationPass {
         List<Double> keptSims = new ArrayList<>();
         int c = 0;
         for (Future<double[]> part : parts) {
-            for (double s : BatchRunner.await(part)) {
+            for (double s : Futures.await(part, "a worker")) {
                 if (PairRules.isNear(s, threshold)) {
                     kept.add(candidates[c]);
                     keptSims.add(s);
