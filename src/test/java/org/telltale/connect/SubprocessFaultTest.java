@@ -156,7 +156,12 @@ class SubprocessFaultTest {
 
     @Test
     void aWrongRowCountIsAClearError() {
-        assertTrue(fails("wrong-rows").contains("answered 1 rows for 2 texts"));
+        // The model drops the last row of whatever batch it gets; how the texts are split into
+        // batches depends on how many processes the adaptive limit runs, so the count is read back.
+        String m = fails("wrong-rows");
+        java.util.regex.Matcher rows = java.util.regex.Pattern.compile("answered (\\d+) rows for (\\d+) texts").matcher(m);
+        assertTrue(rows.find(), m);
+        assertEquals(Integer.parseInt(rows.group(1)) + 1, Integer.parseInt(rows.group(2)), m);
     }
 
     @Test
