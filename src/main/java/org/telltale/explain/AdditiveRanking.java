@@ -164,41 +164,60 @@ final class AdditiveRanking {
         int d = design.d;
         double[] w = design.w;
         double[] y = design.y;
-        int[][] removed = new int[n][];
-        int[] buffer = new int[d];
-        double total = 0;
-        double yMean = 0;
-        double[] mean = new double[d];
-        for (int i = 0; i < n; i++) {
-            int k = 0;
-            for (int j = 0; j < d; j++) {
-                if (!design.x.present(i, j)) {
-                    buffer[k++] = j;
+        int[][] removed = null;
+        double total;
+        double yMean;
+        double[] mean;
+        double[] gram;
+        double[] rhs;
+        CrossProducts products = design.fitsFromCrossProducts() ? design.crossProducts() : null;
+        if (products != null) {
+            // The selection's cross-products hold the same Gram matrix: the centred products of the
+            // removal indicators equal those of presence, and their products with y are negated.
+            total = products.total;
+            yMean = products.yMean();
+            mean = new double[d];
+            gram = new double[d * d];
+            rhs = new double[d];
+            for (int a = 0; a < d; a++) {
+                mean[a] = 1.0 - products.presenceMean(a);
+                rhs[a] = -products.centredCross(a);
+                for (int b = 0; b < d; b++) {
+                    gram[a * d + b] = products.centredGram(a, b);
                 }
             }
-            removed[i] = Arrays.copyOf(buffer, k);
-            total += w[i];
-            yMean += w[i] * y[i];
-            for (int j : removed[i]) {
-                mean[j] += w[i];
+        } else {
+            removed = removedUnits(design);
+            total = 0;
+            yMean = 0;
+            mean = new double[d];
+            for (int i = 0; i < n; i++) {
+                total += w[i];
+                yMean += w[i] * y[i];
+                for (int j : removed[i]) {
+                    mean[j] += w[i];
+                }
             }
+            if (!(total > 0)) {
+                return null;
+            }
+            yMean /= total;
+            for (int j = 0; j < d; j++) {
+                mean[j] /= total;
+            }
+            gram = centredOuter(removed, w, mean, total, d);
+            rhs = new double[d];
+            for (int i = 0; i < n; i++) {
+                double v = w[i] * (y[i] - yMean);
+                for (int j : removed[i]) {
+                    rhs[j] += v;
+                }
+            }
+            // Σ wᵢ (rᵢ − m)(yᵢ − ȳ) = Σ wᵢ rᵢ (yᵢ − ȳ), since Σ wᵢ (yᵢ − ȳ) = 0.
         }
         if (!(total > 0)) {
             return null;
         }
-        yMean /= total;
-        for (int j = 0; j < d; j++) {
-            mean[j] /= total;
-        }
-        double[] gram = centredOuter(removed, w, mean, total, d);
-        double[] rhs = new double[d];
-        for (int i = 0; i < n; i++) {
-            double v = w[i] * (y[i] - yMean);
-            for (int j : removed[i]) {
-                rhs[j] += v;
-            }
-        }
-        // Σ wᵢ (rᵢ − m)(yᵢ − ȳ) = Σ wᵢ rᵢ (yᵢ − ȳ), since Σ wᵢ (yᵢ − ȳ) = 0.
         Cholesky cholesky = Cholesky.of(gram, d);
         if (cholesky == null) {
             return null;
@@ -208,11 +227,27 @@ final class AdditiveRanking {
         for (int j = 0; j < d; j++) {
             offset += beta[j] * mean[j];
         }
+        double prediction = yMean - offset; // g(1): nothing removed
+        double[] weights = new double[d];
+        double intercept = prediction;
+        for (int j = 0; j < d; j++) {
+            weights[j] = -beta[j];
+            intercept -= weights[j];
+        }
+        if (products != null) {
+            // Most documents are not additive: their R² follows from the cross-products, with no pass.
+            double sst = products.centredTotal();
+            double quick = sst <= 1e-300 ? 1.0 : 1.0 - products.residualSquares(intercept, allUnits(d), weights) / sst;
+            if (!(quick >= leastR2)) {
+                return null;
+            }
+            removed = removedUnits(design);
+        }
         double[] s = new double[n];
         double ssRes = 0;
         double ssTot = 0;
         for (int i = 0; i < n; i++) {
-            double fitted = yMean - offset;
+            double fitted = prediction;
             for (int j : removed[i]) {
                 fitted += beta[j];
             }
@@ -232,16 +267,29 @@ final class AdditiveRanking {
         double[] meat = centredOuterCorrected(removed, s, mean, sTotal, d);
         double[] inverse = cholesky.inverse();
         double[] variance = sandwichDiagonal(inverse, meat, d, n);
-        double[] weights = new double[d];
         double[] se = new double[d];
-        double prediction = yMean - offset; // g(1): nothing removed
-        double intercept = prediction;
         for (int j = 0; j < d; j++) {
-            weights[j] = -beta[j];
             se[j] = Math.sqrt(Math.max(0, variance[j]));
-            intercept -= weights[j];
         }
         return new FullFit(weights, se, intercept, prediction, r2);
+    }
+
+    private static int[] allUnits(int d) {
+        int[] all = new int[d];
+        for (int j = 0; j < d; j++) {
+            all[j] = j;
+        }
+        return all;
+    }
+
+    /** The units each probe removed, probe by probe. */
+    private static int[][] removedUnits(SurrogateFit.Design design) {
+        int[][] removed = new int[design.rows()][];
+        int[] buffer = new int[design.d];
+        for (int i = 0; i < removed.length; i++) {
+            removed[i] = Arrays.copyOf(buffer, design.x.removedUnits(i, buffer));
+        }
+        return removed;
     }
 
     /** Σ vᵢ (rᵢ − m)(rᵢ − m)ᵀ for weights v summing to {@code sum} whose weighted mean of r is m. */

@@ -92,6 +92,72 @@ public final class ForwardSelection {
         return order;
     }
 
+    /**
+     * The same greedy selection from a design's cross-products, without the probes: O(d·K²) for
+     * K steps after the O(Σ k²) pass that gathered them. The coefficients c_jk = q_kᵀx_j of the
+     * Gram–Schmidt basis above are the entries of the Cholesky factor of the centred Gram matrix
+     * G restricted to the chosen columns and extended to every column (the pivoted, incremental
+     * Cholesky factorisation: Golub &amp; Van Loan, Matrix Computations, 4th ed., §4.2.8), so
+     * c_j,step = (G_j,best − Σ_{l&lt;step} c_jl c_best,l) / √rest_best and q_stepᵀy =
+     * (x_bestᵀy − Σ c_best,l q_lᵀy) / √rest_best; forward stepwise selection in this form is
+     * Hastie, Tibshirani &amp; Friedman, The Elements of Statistical Learning, 2nd ed., §3.3.2.
+     * Gains, the collinearity test and ties (the lowest column wins) are those of
+     * {@link #select(Columns, double[], int)}; the sums differ from it only in rounding.
+     */
+    static List<Integer> select(CrossProducts x, int k) {
+        int d = x.d;
+        int steps = Math.min(k, d);
+        double[] norm2 = new double[d];
+        double[] xty = new double[d];
+        for (int j = 0; j < d; j++) {
+            norm2[j] = x.centredGram(j, j);
+            xty[j] = x.centredCross(j);
+        }
+        double[][] factor = new double[steps][]; // factor[l][j] = c_jl
+        double[] explained = new double[d]; // Σ_l c_jl (q_lᵀy)
+        double[] removed = new double[d]; // Σ_l c_jl²
+        boolean[] chosen = new boolean[d];
+        List<Integer> order = new ArrayList<>(steps);
+        for (int step = 0; step < steps; step++) {
+            int best = -1;
+            double bestGain = 0;
+            for (int j = 0; j < d; j++) {
+                if (chosen[j] || !(norm2[j] > 0)) {
+                    continue;
+                }
+                double rest = norm2[j] - removed[j];
+                if (rest <= COLLINEAR * norm2[j]) {
+                    continue;
+                }
+                double proj = xty[j] - explained[j];
+                double gain = proj * proj / rest;
+                if (gain > bestGain) {
+                    bestGain = gain;
+                    best = j;
+                }
+            }
+            if (best < 0) {
+                break;
+            }
+            double root = Math.sqrt(norm2[best] - removed[best]);
+            double qty = (xty[best] - explained[best]) / root;
+            double[] c = new double[d];
+            for (int j = 0; j < d; j++) {
+                double s = x.centredGram(j, best);
+                for (int l = 0; l < step; l++) {
+                    s -= factor[l][j] * factor[l][best];
+                }
+                c[j] = s / root;
+                explained[j] += c[j] * qty;
+                removed[j] += c[j] * c[j];
+            }
+            factor[step] = c;
+            chosen[best] = true;
+            order.add(best);
+        }
+        return order;
+    }
+
     static double dot(double[] a, double[] b) {
         double s = 0;
         for (int i = 0; i < a.length; i++) {

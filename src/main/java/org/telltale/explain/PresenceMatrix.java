@@ -65,6 +65,26 @@ public final class PresenceMatrix implements Columns {
         return n;
     }
 
+    /**
+     * Writes the units probe {@code row} removes into {@code out} in ascending order and returns
+     * their number: one pass over the row's words, O(d/64 + removed).
+     */
+    int removedUnits(int row, int[] out) {
+        int n = 0;
+        for (int w = 0; w < stride; w++) {
+            int base = w << 6;
+            long word = ~bits[row * stride + w];
+            if (base + 64 > units) {
+                word &= (1L << (units - base)) - 1;
+            }
+            while (word != 0) {
+                out[n++] = base + Long.numberOfTrailingZeros(word);
+                word &= word - 1;
+            }
+        }
+        return n;
+    }
+
     @Override
     public void transposeTimes(double[] v, double[] out) {
         Arrays.fill(out, 0, units, 0.0);

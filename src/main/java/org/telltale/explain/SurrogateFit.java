@@ -57,6 +57,7 @@ final class SurrogateFit {
         final double empty;
         final boolean exact;
         final boolean shapley;
+        private CrossProducts products;
 
         private Design(int d, PresenceMatrix x, double[] y, double[] w, double full, double empty, boolean exact,
                 boolean shapley) {
@@ -77,6 +78,26 @@ final class SurrogateFit {
         /** The same probes under other weights (a bandwidth chosen after sampling, {@link BandwidthChoice}). */
         Design reweighted(double[] weights) {
             return new Design(d, x, y, weights, full, empty, exact, shapley);
+        }
+
+        /** As {@link #reweighted(double[])}, with the cross-products already gathered under those weights. */
+        Design reweighted(double[] weights, CrossProducts gathered) {
+            Design out = reweighted(weights);
+            out.products = gathered;
+            return out;
+        }
+
+        /** Whether fits on this design work from its cross-products ({@link CrossProducts#MAX_UNITS}). */
+        boolean fitsFromCrossProducts() {
+            return d <= CrossProducts.MAX_UNITS;
+        }
+
+        /** The design's cross-products, gathered on first use and kept (one pass over the removed units). */
+        CrossProducts crossProducts() {
+            if (products == null) {
+                products = CrossProducts.of(x, y, w);
+            }
+            return products;
         }
     }
 
@@ -138,6 +159,10 @@ final class SurrogateFit {
             for (int i = 0; i < target.length; i++) {
                 target[i] -= design.empty;
             }
+        }
+        if (settings.select() == Selection.FORWARD && design.fitsFromCrossProducts()) {
+            // Centring removes any constant taken off the target, so the Shapley fit's y − f(∅) selects as y does.
+            return ForwardSelection.select(design.crossProducts(), k).stream().mapToInt(Integer::intValue).toArray();
         }
         WeightedCentered view = new WeightedCentered(design.x, target, design.w);
         List<Integer> chosen = switch (settings.select()) {
@@ -202,45 +227,17 @@ final class SurrogateFit {
         PresenceMatrix x = design.x;
         double[] w = design.w;
         double[] y = design.y;
-        double total = 0;
-        double yMean = 0;
-        double[] mean = new double[p];
-        for (int i = 0; i < n; i++) {
-            double wi = w[i];
-            total += wi;
-            yMean += wi * y[i];
-            for (int j = 0; j < p; j++) {
-                if (x.present(i, units[j])) {
-                    mean[j] += wi;
-                }
-            }
-        }
+        NormalEquations normal = design.fitsFromCrossProducts() ? NormalEquations.of(design.crossProducts(), units)
+                : NormalEquations.of(design, units);
+        double total = normal.total();
         if (!(total > 0)) {
             return new Solved(0, new double[p], new double[p], new double[p], 1.0);
         }
-        yMean /= total;
-        for (int j = 0; j < p; j++) {
-            mean[j] /= total;
-        }
-        double[] g = new double[p * p];
-        double[] r = new double[p];
+        double yMean = normal.yMean();
+        double[] mean = normal.mean();
+        double[] g = normal.gram();
+        double[] r = normal.cross();
         double[] row = new double[p];
-        for (int i = 0; i < n; i++) {
-            double wi = w[i];
-            if (wi == 0) {
-                continue;
-            }
-            centredRow(x, i, units, mean, row);
-            double yi = y[i] - yMean;
-            for (int a = 0; a < p; a++) {
-                double va = wi * row[a];
-                r[a] += va * yi;
-                for (int b = 0; b <= a; b++) {
-                    g[a * p + b] += va * row[b];
-                }
-            }
-        }
-        Cholesky.symmetrise(g, p);
         double[] beta = solveRidge(g, r, p, lambda);
         if (beta == null) {
             lambda = 1e-9 * Math.max(1, total);
