@@ -46,13 +46,26 @@ final class ChunkedClassifier implements TextClassifier {
     private final ThreadPoolExecutor pool;
     private final AtomicLong retries = new AtomicLong();
     private final TurnaroundTrace trace;
+    private final ColdStartWarmUp warmUp;
 
     ChunkedClassifier(BatchScorer scorer, ConnectorSettings settings, Redactor redactor, String description) {
-        this(scorer, settings, settings.gatePolicy(), redactor, description);
+        this(scorer, settings, settings.gatePolicy(), redactor, description, ColdStartWarmUp.notStarted());
+    }
+
+    /** With a {@code warmUp} of the connector's code, stopped at the first call. */
+    ChunkedClassifier(BatchScorer scorer, ConnectorSettings settings, Redactor redactor, String description,
+            ColdStartWarmUp warmUp) {
+        this(scorer, settings, settings.gatePolicy(), redactor, description, warmUp);
     }
 
     ChunkedClassifier(BatchScorer scorer, ConnectorSettings settings, InFlightGate.Policy policy, Redactor redactor,
             String description) {
+        this(scorer, settings, policy, redactor, description, ColdStartWarmUp.notStarted());
+    }
+
+    private ChunkedClassifier(BatchScorer scorer, ConnectorSettings settings, InFlightGate.Policy policy, Redactor redactor,
+            String description, ColdStartWarmUp warmUp) {
+        this.warmUp = warmUp;
         this.scorer = scorer;
         this.batch = settings.batch();
         this.trace = TurnaroundTrace.ON ? new TurnaroundTrace() : null;
@@ -77,6 +90,7 @@ final class ChunkedClassifier implements TextClassifier {
         if (ids != null && ids.size() != texts.size()) {
             throw new IllegalArgumentException(ids.size() + " ids for " + texts.size() + " texts");
         }
+        warmUp.stop();
         int n = texts.size();
         double[][] rows = new double[n][];
         double[][] logits = validator.kind() == ScoreKind.LOGITS ? new double[n][] : null; // kept for the explainer
@@ -278,6 +292,7 @@ final class ChunkedClassifier implements TextClassifier {
 
     @Override
     public void close() {
+        warmUp.stop();
         if (trace != null) {
             trace.print(System.err);
         }

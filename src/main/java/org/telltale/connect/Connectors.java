@@ -68,7 +68,8 @@ public final class Connectors {
         }
         String description = where + " (" + String.join(", ", notes) + ")";
         HttpTransport transport = new HttpTransport(settings.timeout(), secrets.values());
-        return new ChunkedClassifier(new HttpScorer(transport, format, where), settings, secrets.redactor(), description);
+        return new ChunkedClassifier(new HttpScorer(transport, format, where), settings, secrets.redactor(), description,
+                ColdStartWarmUp.start());
     }
 
     private static URI checkModelUrl(URI url) {
@@ -89,7 +90,7 @@ public final class Connectors {
         int processes = settings.effectiveParallel();
         var scorer = new SubprocessScorer(command, name, settings.timeout(), processes, settings.maxRestarts());
         String description = "exec:" + String.join(" ", command) + " (" + options(settings) + ")";
-        return new ChunkedClassifier(scorer, settings, Redactor.none(), description);
+        return new ChunkedClassifier(scorer, settings, Redactor.none(), description, ColdStartWarmUp.start());
     }
 
     private static void noHeaders(ConnectorSettings settings, String what) {

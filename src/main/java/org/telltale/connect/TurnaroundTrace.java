@@ -84,7 +84,16 @@ final class TurnaroundTrace {
             sums[i] += Math.max(0, t[i + 1] - t[i]);
         }
         lastAnswer = Math.max(lastAnswer, t[5]);
+        if (stamps != null) {
+            for (int i = 0; i < t.length; i++) {
+                stamps.append(i == 0 ? "" : " ").append(t[i]);
+            }
+            stamps.append('\n');
+        }
     }
+
+    private final StringBuilder stamps = System.getProperty("telltale.turnaround.requests") == null ? null
+            : new StringBuilder("# opened " + System.nanoTime() + "\n");
 
     private final StringBuilder series = System.getProperty("telltale.turnaround.series") == null ? null : new StringBuilder();
 
@@ -158,6 +167,14 @@ final class TurnaroundTrace {
             b.append(String.format(Locale.ROOT, "; most in flight %d, in the second half %d", most, mostSecond));
         }
         out.println(b);
+        if (stamps != null) {
+            try {
+                java.nio.file.Files.writeString(java.nio.file.Path.of(System.getProperty("telltale.turnaround.requests")),
+                        stamps, java.nio.charset.StandardCharsets.UTF_8);
+            } catch (java.io.IOException e) {
+                out.println("turnaround: cannot write the request stamps: " + e.getMessage());
+            }
+        }
         if (series != null) {
             try {
                 java.nio.file.Files.writeString(java.nio.file.Path.of(System.getProperty("telltale.turnaround.series")),
