@@ -114,9 +114,10 @@ final class ExplainCommand implements Callable<Integer> {
         List<Explanation> explanations = new ArrayList<>();
         ModelOptions.ForExplaining opened = model.openForExplaining();
         try (TextClassifier classifier = opened.classifier()) {
-            Explainer explainer = new Explainer(classifier, settings, opened.probeScoring());
+            ConcurrentExplanations concurrently = opened.concurrently();
+            Explainer explainer = new Explainer(concurrently.waitingOn(classifier), settings, opened.probeScoring());
             long start = System.nanoTime();
-            ConcurrentExplanations.explain(explainer, documents, label, ConcurrentExplanations.atOnce(),
+            concurrently.explain(explainer, documents, label,
                     (doc, position, of) -> {
                         if (of > 1) {
                             synchronized (err) {

@@ -10,6 +10,7 @@ import org.telltale.connect.Connectors;
 import org.telltale.connect.Durations;
 import org.telltale.connect.Protocol;
 import org.telltale.connect.ScoreKind;
+import org.telltale.explain.ConcurrentExplanations;
 import org.telltale.model.BuiltinModel;
 import org.telltale.model.ModelFile;
 import org.telltale.model.ProbeScoring;
@@ -93,7 +94,14 @@ public final class ModelOptions {
      * scores an explanation's probes without their texts where that is exact (null otherwise).
      * Closing the connector closes the model.
      */
-    record ForExplaining(TextClassifier classifier, ProbeScoring probeScoring) {
+    record ForExplaining(TextClassifier classifier, ProbeScoring probeScoring, boolean inProcess) {
+        /**
+         * How to explain documents at once with this model: one per core when it scores in this
+         * process, more in flight than cores when it scores elsewhere (a service, a subprocess).
+         */
+        ConcurrentExplanations concurrently() {
+            return inProcess ? ConcurrentExplanations.inProcess() : ConcurrentExplanations.forRemoteModel();
+        }
     }
 
     /** Opens the connector as {@link #open()} does, keeping a built-in model's probe scoring; the caller closes the classifier. */
@@ -101,9 +109,9 @@ public final class ModelOptions {
         ConnectorSettings settings = settings();
         if (settings.kind() == ConnectorSettings.Kind.FILE && !settings.spec().contains("://")) {
             BuiltinModel builtin = ModelFile.load(java.nio.file.Path.of(settings.spec()));
-            return new ForExplaining(Connectors.inProcess(builtin, settings), builtin);
+            return new ForExplaining(Connectors.inProcess(builtin, settings), builtin, true);
         }
-        return new ForExplaining(Connectors.open(settings), null);
+        return new ForExplaining(Connectors.open(settings), null, settings.kind() == ConnectorSettings.Kind.FILE);
     }
 
     /** Under {@code --verbose}, prints on stderr how many requests the connector kept in flight (for auto, where it settled). */

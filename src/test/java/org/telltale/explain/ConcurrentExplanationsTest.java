@@ -22,10 +22,10 @@ class ConcurrentExplanationsTest {
         Explainer explainer = new Explainer(new FunctionClassifier(w -> w.contains("refund") ? 0.8 : 0.3),
                 ExplainSettings.defaults().withProbes(300));
         List<Explanation> one = new ArrayList<>();
-        ConcurrentExplanations.explain(explainer, DOCS, null, 1, (d, i, n) -> { }, one::add);
+        ConcurrentExplanations.atOnce(1).explain(explainer, DOCS, null, (d, i, n) -> { }, one::add);
         List<Explanation> three = new ArrayList<>();
         List<String> started = java.util.Collections.synchronizedList(new ArrayList<>());
-        ConcurrentExplanations.explain(explainer, DOCS, null, 3, (d, i, n) -> started.add(d.id()), three::add);
+        ConcurrentExplanations.atOnce(3).explain(explainer, DOCS, null, (d, i, n) -> started.add(d.id()), three::add);
         assertEquals(DOCS.stream().map(Document::id).toList(), three.stream().map(Explanation::id).toList());
         assertEquals(5, started.size());
         for (int i = 0; i < DOCS.size(); i++) {
@@ -38,8 +38,8 @@ class ConcurrentExplanationsTest {
     void theFirstFailureInDocumentOrderIsThrownAsItWas() {
         Explainer explainer = new Explainer(new FunctionClassifier(w -> 0.5), ExplainSettings.defaults().withProbes(50));
         List<Explanation> got = new ArrayList<>();
-        TelltaleException e = assertThrows(TelltaleException.class, () -> ConcurrentExplanations.explain(explainer,
-                DOCS, "maybe", 2, (d, i, n) -> { }, got::add));
+        TelltaleException e = assertThrows(TelltaleException.class, () -> ConcurrentExplanations.atOnce(2).explain(explainer,
+                DOCS, "maybe", (d, i, n) -> { }, got::add));
         assertEquals(0, got.size());
         assertEquals(true, e.getMessage().startsWith("document a:"), e.getMessage());
     }
