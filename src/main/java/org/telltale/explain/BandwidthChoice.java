@@ -49,7 +49,8 @@ final class BandwidthChoice {
      */
     static Choice choose(SurrogateFit fitter, SurrogateFit.Design base, List<BitSet> rows,
             double[] y, int draws, double proposal, int k) {
-        SurrogateFit.Design[][] folds = candidateHalves(halves(fitter, base.d, rows, y, draws), proposal);
+        SurrogateFit.Design[][] folds = candidateHalves(base.rows() == rows.size() ? halves(base)
+                : halves(fitter, base.d, rows, y, draws), proposal);
         double[] scores = new double[CANDIDATES.length];
         double proposalScore = Double.NEGATIVE_INFINITY;
         int best = -1;
@@ -63,11 +64,24 @@ final class BandwidthChoice {
             }
         }
         double sigma = CANDIDATES[best];
+        int chosen = best;
         if (sigma == proposal || !(scores[best] > proposalScore + MARGIN)) {
-            return new Choice(proposal, base, scores);
+            sigma = proposal;
+            for (int c = 0; c < CANDIDATES.length; c++) {
+                chosen = CANDIDATES[c] == proposal ? c : chosen;
+            }
         }
         // Only the winner's full design is reweighted; the candidates were scored on the halves.
-        return new Choice(sigma, base.reweighted(reweight(base, removedCounts(base), proposal, sigma)), scores);
+        double[] weights = sigma == proposal ? base.w : reweight(base, removedCounts(base), proposal, sigma);
+        SurrogateFit.Design[] winner = folds[chosen];
+        if (!base.fitsFromCrossProducts() || CANDIDATES[chosen] != sigma || winner[0].x.presentCount(0) != base.d
+                || winner[1].x.presentCount(0) != base.d) {
+            return new Choice(sigma, sigma == proposal ? base : base.reweighted(weights), scores);
+        }
+        // The halves share probe 0 (it removes nothing) and hold every other probe once between them.
+        CrossProducts whole = CrossProducts.joined(winner[0].crossProducts(), winner[1].crossProducts(),
+                winner[0].w[0]);
+        return new Choice(sigma, base.reweighted(weights, whole), scores);
     }
 
     private static int[] removedCounts(SurrogateFit.Design design) {
@@ -78,7 +92,28 @@ final class BandwidthChoice {
         return removed;
     }
 
-    /** The probes dealt alternately into two halves, probe 0 in both. */
+    /**
+     * The probes dealt alternately into two halves, probe 0 in both, taken from the design's rows
+     * when it holds every probe (the cosine kernel sets none apart): a probe's weight depends only
+     * on how many units it removes, so a half's rows are the design's rows.
+     */
+    private static SurrogateFit.Design[] halves(SurrogateFit.Design base) {
+        SurrogateFit.Design[] out = new SurrogateFit.Design[2];
+        int n = base.rows();
+        for (int h = 0; h < 2; h++) {
+            int[] which = new int[n];
+            int at = 0;
+            for (int i = 0; i < n; i++) {
+                if (i == 0 || i % 2 == h) {
+                    which[at++] = i;
+                }
+            }
+            out[h] = base.rows(java.util.Arrays.copyOf(which, at));
+        }
+        return out;
+    }
+
+    /** The probes dealt alternately into two halves, probe 0 in both, each made a design of its own. */
     private static SurrogateFit.Design[] halves(SurrogateFit fitter, int d, List<BitSet> rows,
             double[] y, int draws) {
         SurrogateFit.Design[] out = new SurrogateFit.Design[2];
@@ -176,10 +211,16 @@ final class BandwidthChoice {
     static double[] reweight(SurrogateFit.Design base, int[] removed, double proposal, double sigma) {
         double[] w = new double[base.rows()];
         double inverse = 1 / (sigma * sigma) - 1 / (proposal * proposal);
+        double[] ratio = new double[base.d + 1]; // per removed count, computed once: it depends on nothing else
+        java.util.Arrays.fill(ratio, Double.NaN);
         for (int i = 0; i < w.length; i++) {
-            double dist = Kernel.cosineDistance(base.d, removed[i]);
-            // π_σ(k) / π_σ₀(k) = exp(−D²(1/σ² − 1/σ₀²)); 1 for probe 0.
-            w[i] = base.w[i] * Math.exp(-dist * dist * inverse);
+            int k = removed[i];
+            if (Double.isNaN(ratio[k])) {
+                double dist = Kernel.cosineDistance(base.d, k);
+                // π_σ(k) / π_σ₀(k) = exp(−D²(1/σ² − 1/σ₀²)); 1 for probe 0.
+                ratio[k] = Math.exp(-dist * dist * inverse);
+            }
+            w[i] = base.w[i] * ratio[k];
         }
         return w;
     }

@@ -42,6 +42,15 @@ public final class PresenceMatrix implements Columns {
         return new PresenceMatrix(bits, words, n, units);
     }
 
+    /** The matrix of the given rows, in the order given. */
+    PresenceMatrix rows(int[] which) {
+        long[] out = new long[which.length * stride];
+        for (int i = 0; i < which.length; i++) {
+            System.arraycopy(bits, which[i] * stride, out, i * stride, stride);
+        }
+        return new PresenceMatrix(out, stride, which.length, units);
+    }
+
     @Override
     public int rows() {
         return rows;

@@ -80,6 +80,17 @@ final class SurrogateFit {
             return new Design(d, x, y, weights, full, empty, exact, shapley);
         }
 
+        /** The design of the given rows only (same weights), in the order given. */
+        Design rows(int[] which) {
+            double[] sy = new double[which.length];
+            double[] sw = new double[which.length];
+            for (int i = 0; i < which.length; i++) {
+                sy[i] = y[which[i]];
+                sw[i] = w[which[i]];
+            }
+            return new Design(d, x.rows(which), sy, sw, full, empty, exact, shapley);
+        }
+
         /** As {@link #reweighted(double[])}, with the cross-products already gathered under those weights. */
         Design reweighted(double[] weights, CrossProducts gathered) {
             Design out = reweighted(weights);

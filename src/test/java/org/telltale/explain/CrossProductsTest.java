@@ -108,6 +108,43 @@ class CrossProductsTest {
     }
 
     @Test
+    void twoHalvesSharingProbeZeroJoinToTheProductsOfAllProbes() {
+        Probes p = probes(45, 21);
+        int n = p.y().length;
+        int[][] halves = new int[2][];
+        for (int h = 0; h < 2; h++) {
+            List<Integer> rows = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                if (i == 0 || i % 2 == h) {
+                    rows.add(i);
+                }
+            }
+            halves[h] = rows.stream().mapToInt(Integer::intValue).toArray();
+        }
+        CrossProducts[] parts = new CrossProducts[2];
+        for (int h = 0; h < 2; h++) {
+            double[] y = new double[halves[h].length];
+            double[] w = new double[halves[h].length];
+            for (int i = 0; i < y.length; i++) {
+                y[i] = p.y()[halves[h][i]];
+                w[i] = p.w()[halves[h][i]];
+            }
+            parts[h] = CrossProducts.of(p.x().rows(halves[h]), y, w);
+        }
+        CrossProducts joined = CrossProducts.joined(parts[0], parts[1], p.w()[0]);
+        CrossProducts all = CrossProducts.of(p.x(), p.y(), p.w());
+        assertEquals(all.total, joined.total, 1e-12 * all.total);
+        assertEquals(all.centredTotal(), joined.centredTotal(), 1e-9 * all.centredTotal());
+        for (int a = 0; a < 45; a++) {
+            assertEquals(all.presenceMean(a), joined.presenceMean(a), 1e-12);
+            assertEquals(all.centredCross(a), joined.centredCross(a), 1e-9);
+            for (int b = 0; b < 45; b++) {
+                assertEquals(all.centredGram(a, b), joined.centredGram(a, b), 1e-9);
+            }
+        }
+    }
+
+    @Test
     void residualSquaresEqualTheSumOverTheProbesOfAnySurrogate() {
         Probes p = probes(40, 11);
         CrossProducts s = CrossProducts.of(p.x(), p.y(), p.w());
