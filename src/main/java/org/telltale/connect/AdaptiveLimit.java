@@ -23,8 +23,10 @@ import java.util.Arrays;
  *       RTprop): how many requests the service holds at capacity with none waiting.</li>
  *   <li><b>Startup</b> (BBR's STARTUP): while the demand fills the limit, one more per answer,
  *       which doubles it per round trip; it ends when the delivery rate has not grown by a quarter
- *       in two rounds (BBR waits three), or in one round when it grew less than 5 % or every answer
- *       of the round took more than twice the smallest latency; or at the first 429, 503 or timeout.
+ *       in two rounds (BBR waits three), or in one round when it grew less than 5 %; at once in a
+ *       round whose median latency is over {@link #QUEUEING_RATIO} times the smallest (half of what
+ *       was in flight waited: TCP Vegas's slow-start exit, Brakmo and Peterson 1995), or at the first
+ *       429, 503 or timeout.
  *       So a large capacity is reached in a few round trips, not one more per round.</li>
  *   <li><b>Steady state</b>: the limit is {@link #PIPE_GAIN} times the pipe (at least one more):
  *       a few requests wait at the service, so its workers do not idle while an answer travels
@@ -50,6 +52,14 @@ final class AdaptiveLimit implements InFlightGate.Policy {
     static final int RATE_ROUNDS = 10;
     /** The limit in steady state, in pipes. */
     static final double PIPE_GAIN = 1.5;
+    /**
+     * Startup ends in a round whose median latency exceeds the smallest by this factor: by Little's
+     * law, about half of what was in flight then waited at the service (TCP Vegas's slow-start exit,
+     * Brakmo and Peterson 1995, with its threshold as a share of the requests in flight). Less would
+     * read noise as queueing: with nothing waiting, the Python bench service and a cold client
+     * answered a 20 ms request in up to 35 ms.
+     */
+    static final double QUEUEING_RATIO = 2.0;
     /** Growth of the delivery rate per round below which startup counts a round as flat. */
     static final double STARTUP_GROWTH = 1.25;
 
@@ -65,11 +75,12 @@ final class AdaptiveLimit implements InFlightGate.Policy {
     private long baseRtt = Long.MAX_VALUE;
     private final double[] roundRates = new double[RATE_ROUNDS];
     private int rounds;
+    private int roundsEnded;
     private long roundStart = Long.MIN_VALUE;
     private double[] roundSamples = new double[16];
+    private long[] roundRtts = new long[16];
     private int roundAnswers;
     private boolean roundLimited;
-    private long roundMinRtt = Long.MAX_VALUE;
 
     AdaptiveLimit(int initial, int max) {
         if (max < 1) {
@@ -126,7 +137,6 @@ final class AdaptiveLimit implements InFlightGate.Policy {
         boolean full = a.size() * 2 >= fullBatch;
         if (full) {
             baseRtt = Math.min(baseRtt, Math.max(1, a.rtt()));
-            roundMinRtt = Math.min(roundMinRtt, Math.max(1, a.rtt()));
         }
         if (startup && limited) {
             limit = clamp(limit + 1);
@@ -138,7 +148,9 @@ final class AdaptiveLimit implements InFlightGate.Policy {
         if (full) {
             if (roundAnswers == roundSamples.length) {
                 roundSamples = Arrays.copyOf(roundSamples, 2 * roundAnswers);
+                roundRtts = Arrays.copyOf(roundRtts, 2 * roundAnswers);
             }
+            roundRtts[roundAnswers] = Math.max(1, a.rtt());
             roundSamples[roundAnswers++] = Math.max(1, a.deliveredSince()) / (double) Math.max(1, a.rtt());
         }
         if (a.sentAt() >= roundStart && roundAnswers > 0) {
@@ -149,6 +161,10 @@ final class AdaptiveLimit implements InFlightGate.Policy {
     private void endRound(long now) {
         Arrays.sort(roundSamples, 0, roundAnswers);
         double rate = roundSamples[roundAnswers / 2];
+        Arrays.sort(roundRtts, 0, roundAnswers);
+        // Not in the first round: its requests all left before any answer, so their latency holds the
+        // connections' set-up and a cold client (up to three times a 20 ms service's), not a queue.
+        boolean queueing = roundsEnded++ > 0 && roundRtts[roundAnswers / 2] > QUEUEING_RATIO * baseRtt;
         double c = capacity();
         if (roundLimited || rate > c) {
             roundRates[rounds++ % RATE_ROUNDS] = rate;
@@ -158,13 +174,17 @@ final class AdaptiveLimit implements InFlightGate.Policy {
             ceiling++;
             ceilingSince = now;
         }
-        if (startup) {
+        if (startup && queueing) {
+            // Half of what was in flight waited: leave now, whatever the rate did (a client that gets
+            // faster as its code compiles delivers more per round while the queue grows).
+            startup = false;
+            limit = clamp(target());
+        } else if (startup) {
             if (rate >= STARTUP_GROWTH * startupBest) {
                 startupBest = rate;
                 flatRounds = 0;
             } else if (roundLimited) {
-                boolean queued = roundMinRtt != Long.MAX_VALUE && roundMinRtt > 2 * baseRtt;
-                flatRounds += rate < 1.05 * startupBest || queued ? 2 : 1;
+                flatRounds += rate < 1.05 * startupBest ? 2 : 1;
             }
             if (flatRounds >= 2) {
                 startup = false;
@@ -182,7 +202,6 @@ final class AdaptiveLimit implements InFlightGate.Policy {
         roundStart = now;
         roundAnswers = 0;
         roundLimited = false;
-        roundMinRtt = Long.MAX_VALUE;
     }
 
     /** {@link #PIPE_GAIN} pipes, at least one more than the pipe. */

@@ -44,6 +44,7 @@ final class ChunkedClassifier implements TextClassifier {
     private final Redactor redactor;
     private final String description;
     private final ThreadPoolExecutor pool;
+    private final int maxWorkers;
     private final AtomicLong retries = new AtomicLong();
     private final TurnaroundTrace trace;
     private final ColdStartWarmUp warmUp;
@@ -75,9 +76,33 @@ final class ChunkedClassifier implements TextClassifier {
         this.validator = new ResponseValidator(settings.scores());
         this.redactor = redactor;
         this.description = redactor.redact(description);
-        int workers = policy.max() + InFlightGate.ahead(policy.max());
-        this.pool = new ThreadPoolExecutor(workers, workers, 30, TimeUnit.SECONDS, new LinkedBlockingQueue<>(), daemonThreads());
+        this.maxWorkers = policy.max() + InFlightGate.ahead(policy.max());
+        int first = workersFor(policy.limit());
+        this.pool = new ThreadPoolExecutor(first, maxWorkers, 30, TimeUnit.SECONDS, new LinkedBlockingQueue<>(), daemonThreads());
         this.pool.allowCoreThreadTimeOut(true);
+        // Started now, while the caller prepares its texts: in a fresh JVM, starting a thread per batch
+        // submitted spread the first 16 requests of a run over 30 ms (docs/performance.md, "Cold start").
+        this.pool.prestartAllCoreThreads();
+    }
+
+    /** Workers to keep a limit busy: one per place in flight and per body prepared ahead of it. */
+    private int workersFor(int limit) {
+        return Math.min(maxWorkers, limit + InFlightGate.ahead(limit));
+    }
+
+    /**
+     * Grows the workers with the limit (a worker waits for its place, so more than the limit plus
+     * the bodies ahead would only wait); never shrinks them, so a lower limit keeps its threads.
+     */
+    private void growWorkers() {
+        int wanted = workersFor(gate.limit());
+        if (wanted > pool.getCorePoolSize()) {
+            synchronized (pool) {
+                if (wanted > pool.getCorePoolSize()) {
+                    pool.setCorePoolSize(wanted);
+                }
+            }
+        }
     }
 
     @Override
@@ -168,6 +193,7 @@ final class ChunkedClassifier implements TextClassifier {
                 }
                 long answeredAt = trace == null ? 0 : System.nanoTime();
                 gate.answered(ticket, chunk.size(), reply.measured());
+                growWorkers();
                 RawScores raw;
                 try {
                     raw = reply.decode();
@@ -273,6 +299,11 @@ final class ChunkedClassifier implements TextClassifier {
         }
         return String.format(Locale.ROOT, "%s in flight: auto, settled at %d (peak %d, at most %d)", unit, gate.settled(),
                 gate.peak(), gate.max());
+    }
+
+    /** How many worker threads are started. */
+    int workers() {
+        return pool.getPoolSize();
     }
 
     /** The gate's current limit. */

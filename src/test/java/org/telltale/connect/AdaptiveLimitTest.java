@@ -254,4 +254,40 @@ class AdaptiveLimitTest {
         limit.answered(30 * MS, new InFlightGate.Answer(25 * MS, 2 * MS, 3, 1, 1, 1, false)); // a last batch of 3 texts, quick
         assertEquals(20 * MS, limit.baseRtt());
     }
+
+    @Test
+    void aQueueBuildingWhileTheRateStillGrowsEndsStartup() {
+        // A client that gets faster as its code compiles: each round delivers a third more than the
+        // last, so the rate alone never says "flat"; but from the third round on the median answer
+        // takes 2.5 times the smallest latency: half of what is in flight waits (Vegas's signal).
+        AdaptiveLimit limit = new AdaptiveLimit(8, 64);
+        long now = 0;
+        double perMs = 0.4;
+        for (int round = 0; round < 5 && limit.inStartup(); round++) {
+            int n = limit.limit();
+            long rtt = (round < 2 ? 20 : 50) * MS;
+            long sentAt = now;
+            now += rtt;
+            for (int i = 0; i < n; i++) {
+                limit.answered(now, answer(sentAt, rtt, n, (int) Math.round(perMs * rtt / MS)));
+            }
+            perMs *= 1.34;
+        }
+        assertTrue(!limit.inStartup(), "still in startup at " + limit.limit());
+        assertTrue(limit.limit() < 32, "limit " + limit.limit());
+    }
+
+    @Test
+    void theFirstRoundsSlowAnswersAreNotTakenForAQueue() {
+        // The first flight (connections opened, code cold) answers at three times the smallest
+        // latency seen later; startup goes on doubling.
+        AdaptiveLimit limit = new AdaptiveLimit(8, 64);
+        limit.answered(20 * MS, answer(0, 20 * MS, 8, 1)); // opens the first round
+        for (int i = 1; i < 8; i++) {
+            limit.answered(60 * MS, answer(0, 60 * MS, 8, i + 1));
+        }
+        limit.answered(82 * MS, answer(61 * MS, 21 * MS, 16, 8)); // the first answer to a request sent in the round
+        assertTrue(limit.inStartup(), "left startup at " + limit.limit());
+        assertTrue(limit.limit() >= 16, "limit " + limit.limit());
+    }
 }

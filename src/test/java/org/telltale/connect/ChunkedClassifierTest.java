@@ -253,4 +253,19 @@ class ChunkedClassifierTest {
             assertEquals("requests in flight: 3 (fixed)", c.concurrency());
         }
     }
+
+    @Test
+    void startsTheWorkersItsFirstLimitCanUseBeforeTheFirstCall() {
+        // Started at construction, before the first call (in a fresh JVM, a thread started per batch
+        // submitted spread the first requests of a run over 30 ms), and only as many as the limit
+        // and the bodies prepared ahead of it can use, not 64 + 32 at the first call.
+        ConnectorSettings settings = ConnectorSettings.of("mem").withBatch(1);
+        AdaptiveLimit limit = new AdaptiveLimit(4, 64);
+        try (ChunkedClassifier c = new ChunkedClassifier(new InProcessScorer(new LengthModel(5), false), settings, limit,
+                Redactor.none(), "mem")) {
+            assertEquals(4 + InFlightGate.ahead(4), c.workers());
+            assertEquals(40, c.score(texts(40)).size());
+            assertTrue(c.workers() >= 4 + InFlightGate.ahead(4), c.workers() + " workers at limit " + c.limit());
+        }
+    }
 }
