@@ -10,12 +10,16 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.function.Consumer;
+import java.util.function.Function;
 import java.util.function.Supplier;
 import org.apache.lucene.analysis.Analyzer;
 import org.telltale.OutOfResources;
 import org.telltale.TelltaleException;
 import org.telltale.audit.AuditResult.Scrub;
 import org.telltale.audit.AuditResult.Summary;
+import org.telltale.explain.ConcurrentExplanations;
+import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
 import org.telltale.model.ScoreMatrix;
 import org.telltale.model.TextClassifier;
@@ -56,6 +60,39 @@ public final class Auditor {
     /** Explains one document for the label the model predicts. */
     public interface ExplainStep {
         Explanation explain(Document document);
+
+        /**
+         * Applies {@code each} (this step's {@link #explain}, as the audit guards it) to
+         * {@code documents} and gives the explanations to {@code then} in the documents' order, on
+         * the calling thread; the first failure in that order is thrown as it was. By default one
+         * document after another; a front may explain several at once.
+         */
+        default void inOrder(List<Document> documents, Function<Document, Explanation> each,
+                Consumer<Explanation> then) {
+            for (Document d : documents) {
+                then.accept(each.apply(d));
+            }
+        }
+
+        /**
+         * {@code explainer} for the predicted label, several documents at once as
+         * {@code concurrently} allows (the explainer reaching the model through
+         * {@link ConcurrentExplanations#waitingOn}); results as one after another.
+         */
+        static ExplainStep concurrently(Explainer explainer, ConcurrentExplanations concurrently) {
+            return new ExplainStep() {
+                @Override
+                public Explanation explain(Document document) {
+                    return explainer.explain(document, null);
+                }
+
+                @Override
+                public void inOrder(List<Document> documents, Function<Document, Explanation> each,
+                        Consumer<Explanation> then) {
+                    concurrently.inOrder(documents.size(), i -> each.apply(documents.get(i)), then);
+                }
+            };
+        }
     }
 
     /** Turns an explanation into one line of JSON and back: the {@code telltale.explanations} line form. */
@@ -342,21 +379,35 @@ public final class Auditor {
             }
         }
         progress.phase("explaining", ids.size());
-        List<Explanation> out = new ArrayList<>();
+        // The documents the journal does not hold yet, in sample order, up to the first one missing.
+        List<Document> todo = new ArrayList<>();
+        String missing = null;
         for (String id : ids) {
             Document d = s.documentsById.get(id);
             if (d == null) {
-                throw new TelltaleException("document " + id + " was scored but is missing on a second read of the corpus");
+                missing = id;
+                break;
             }
-            String line = journal.explained(id);
-            if (line == null) {
-                line = guarded("document '" + id + "' while explaining",
-                        () -> codec.toLine(explainer.explain(d)));
-                journal.appendExplained(id, line, newRetries());
+            if (journal.explained(id) == null) {
+                todo.add(d);
+            } else {
+                progress.advance(1);
             }
+        }
+        explainer.inOrder(todo,
+                d -> guarded("document '" + d.id() + "' while explaining", () -> explainer.explain(d)),
+                e -> {
+                    String line = guarded("document '" + e.id() + "' while explaining", () -> codec.toLine(e));
+                    journal.appendExplained(e.id(), line, newRetries());
+                    progress.advance(1);
+                });
+        if (missing != null) {
+            throw new TelltaleException("document " + missing + " was scored but is missing on a second read of the corpus");
+        }
+        List<Explanation> out = new ArrayList<>();
+        for (String id : ids) {
             // Always the journaled form: a resumed run and an uninterrupted one see the same numbers.
-            out.add(codec.fromLine(line, journal.file() + " (document " + id + ")"));
-            progress.advance(1);
+            out.add(codec.fromLine(journal.explained(id), journal.file() + " (document " + id + ")"));
         }
         progress.done();
         return out;

@@ -19,6 +19,7 @@ import org.telltale.audit.OutputFolder;
 import org.telltale.audit.Policy;
 import org.telltale.audit.RunFingerprint;
 import org.telltale.audit.Severity;
+import org.telltale.explain.ConcurrentExplanations;
 import org.telltale.explain.ExplainSettings;
 import org.telltale.explain.Explainer;
 import org.telltale.explain.Explanation;
@@ -112,14 +113,16 @@ final class AuditCommand implements Callable<Integer> {
         Auditor.Progress progress = AuditProgressBar.forTerminal(quiet);
         Auditor.Outcome outcome;
         String concurrency;
-        try (TextClassifier classifier = model.open()) {
+        ModelOptions.ForExplaining opened = model.openForExplaining();
+        try (TextClassifier classifier = opened.classifier()) {
             RunFingerprint fingerprint = RunFingerprint.of(RunFingerprint.corpus(corpus.path()),
                     ModelIdentity.of(model.settings()), seed, settings, policy == null ? null : RunFingerprint.sha256(policy),
                     explain);
             Path journalFile = folder.file(OutputFolder.JOURNAL);
-            Explainer explainer = new Explainer(classifier, explain);
-            Auditor auditor = new Auditor(classifier, d -> explainer.explain(d, null), new Codec(), analyzer.analyzer(),
-                    settings, seed, rules, progress);
+            ConcurrentExplanations concurrently = opened.concurrently();
+            Explainer explainer = new Explainer(concurrently.waitingOn(classifier), explain, opened.probeScoring());
+            Auditor auditor = new Auditor(classifier, Auditor.ExplainStep.concurrently(explainer, concurrently), new Codec(),
+                    analyzer.analyzer(), settings, seed, rules, progress);
             try (Journal journal = resume ? Journal.resume(journalFile, fingerprint) : Journal.create(journalFile, fingerprint)) {
                 outcome = auditor.run(corpus::open, journal, classifier.describe(), corpus.path().getFileName().toString());
             } finally {
