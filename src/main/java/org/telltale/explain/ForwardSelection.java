@@ -44,23 +44,7 @@ public final class ForwardSelection {
         List<Integer> order = new ArrayList<>(steps);
 
         for (int step = 0; step < steps; step++) {
-            int best = -1;
-            double bestGain = 0;
-            for (int j = 0; j < d; j++) {
-                if (chosen[j] || norm2[j] == 0) {
-                    continue;
-                }
-                double rest = norm2[j] - removed[j];
-                if (rest <= COLLINEAR * norm2[j]) {
-                    continue;
-                }
-                double proj = xty[j] - explained[j];
-                double gain = proj * proj / rest;
-                if (gain > bestGain) {
-                    bestGain = gain;
-                    best = j;
-                }
-            }
+            int best = mostGain(norm2, removed, xty, explained, chosen);
             if (best < 0) {
                 break; // every remaining column is collinear with the chosen ones or constant
             }
@@ -119,23 +103,7 @@ public final class ForwardSelection {
         boolean[] chosen = new boolean[d];
         List<Integer> order = new ArrayList<>(steps);
         for (int step = 0; step < steps; step++) {
-            int best = -1;
-            double bestGain = 0;
-            for (int j = 0; j < d; j++) {
-                if (chosen[j] || !(norm2[j] > 0)) {
-                    continue;
-                }
-                double rest = norm2[j] - removed[j];
-                if (rest <= COLLINEAR * norm2[j]) {
-                    continue;
-                }
-                double proj = xty[j] - explained[j];
-                double gain = proj * proj / rest;
-                if (gain > bestGain) {
-                    bestGain = gain;
-                    best = j;
-                }
-            }
+            int best = mostGain(norm2, removed, xty, explained, chosen);
             if (best < 0) {
                 break;
             }
@@ -164,5 +132,31 @@ public final class ForwardSelection {
             s += a[i] * b[i];
         }
         return s;
+    }
+
+    /**
+     * The column not yet chosen whose residual part explains most of y's residual: gain
+     * (x_jᵀy − Σ c_jl q_lᵀy)² / (‖x_j‖² − Σ c_jl²). Constant columns and columns collinear with the
+     * chosen ones are skipped; on ties the lowest column wins. −1 when none is left.
+     */
+    private static int mostGain(double[] norm2, double[] removed, double[] xty, double[] explained, boolean[] chosen) {
+        int best = -1;
+        double bestGain = 0;
+        for (int j = 0; j < norm2.length; j++) {
+            if (chosen[j] || !(norm2[j] > 0)) {
+                continue;
+            }
+            double rest = norm2[j] - removed[j];
+            if (rest <= COLLINEAR * norm2[j]) {
+                continue;
+            }
+            double proj = xty[j] - explained[j];
+            double gain = proj * proj / rest;
+            if (gain > bestGain) {
+                bestGain = gain;
+                best = j;
+            }
+        }
+        return best;
     }
 }
