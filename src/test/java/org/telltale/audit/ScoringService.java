@@ -22,7 +22,7 @@ import org.telltale.model.TextClassifier;
 /**
  * A model service on loopback speaking Telltale's scoring protocol
  * ({@code {"texts": […]}} → {@code {"labels": […], "scores": [[…]]}}), with scripted faults: one
- * POST answered 503 (a connector retries it), and from a given POST on, 500 for everything (the
+ * POST answered 503 (a connector retries it), and once a condition holds, 500 for everything (the
  * service is down) until {@link #heal()}.
  */
 final class ScoringService implements AutoCloseable {
@@ -36,6 +36,7 @@ final class ScoringService implements AutoCloseable {
     final List<String> authorizations = new java.util.concurrent.CopyOnWriteArrayList<>();
     private volatile int unavailableAt = -1;
     private volatile int downFrom = Integer.MAX_VALUE;
+    private volatile java.util.function.BooleanSupplier downWhen = () -> false;
 
     ScoringService(TextClassifier model) throws IOException {
         this.model = model;
@@ -49,15 +50,20 @@ final class ScoringService implements AutoCloseable {
         return "http://127.0.0.1:" + server.getAddress().getPort() + "/score";
     }
 
-    /** POST number {@code post} (1-based) is answered 503 once; from {@code down} on, every POST gets 500. */
-    void fail(int post, int down) {
+    /**
+     * POST number {@code post} (1-based) is answered 503 once; once {@code down} holds (checked at
+     * each POST), every POST from then on gets 500. For clients whose progress, not their count of
+     * requests, should decide when the outage begins.
+     */
+    void fail(int post, java.util.function.BooleanSupplier down) {
         unavailableAt = post;
-        downFrom = down;
+        downWhen = down;
     }
 
     void heal() {
         unavailableAt = -1;
         downFrom = Integer.MAX_VALUE;
+        downWhen = () -> false;
     }
 
     private void handle(HttpExchange exchange) throws IOException {
@@ -70,6 +76,9 @@ final class ScoringService implements AutoCloseable {
             if (n == unavailableAt) {
                 send(exchange, 503, "{\"error\":\"warming up\"}");
                 return;
+            }
+            if (n < downFrom && downWhen.getAsBoolean()) {
+                downFrom = n;
             }
             if (n >= downFrom) {
                 send(exchange, 500, "{\"error\":\"down\"}");
